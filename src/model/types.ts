@@ -1,0 +1,180 @@
+/**
+ * The core vocabulary of averta: plain, read-only data shared by every stage.
+ * Money is in the scenario's currency units; years are whole years; rates are fractions.
+ */
+
+/** KABCO injury severity of a crash (its most severe injury). K+A are the KSI crashes. */
+export type Severity = "K" | "A" | "B" | "C" | "O";
+export const SEVERITIES: readonly Severity[] = ["K", "A", "B", "C", "O"];
+export const KSI_SEVERITIES: readonly Severity[] = ["K", "A"];
+
+/** Crash types by manner of collision or road user involved. */
+export type CrashType =
+  | "pedestrian"
+  | "bicycle"
+  | "motorcycle"
+  | "angle"
+  | "rear-end"
+  | "head-on"
+  | "run-off-road"
+  | "other";
+export const CRASH_TYPES: readonly CrashType[] = [
+  "pedestrian",
+  "bicycle",
+  "motorcycle",
+  "angle",
+  "rear-end",
+  "head-on",
+  "run-off-road",
+  "other",
+];
+
+/** Crashes (or crashes per year) for every crash type × severity cell; absent cells are zero. */
+export type CrashMatrix = Readonly<Record<CrashType, Readonly<Record<Severity, number>>>>;
+
+export type SiteKind = "intersection" | "segment" | "corridor";
+export const SITE_KINDS: readonly SiteKind[] = ["intersection", "segment", "corridor"];
+
+/** One crash-modification effect of a treatment on a set of crash cells. */
+export interface Effect {
+  readonly crashTypes: readonly CrashType[];
+  readonly severities: readonly Severity[];
+  /** Crash modification factor: expected crashes with / without the treatment. */
+  readonly cmf: number;
+  /** Standard error of the CMF, when the source publishes one. */
+  readonly standardError?: number;
+  /** Where the value comes from (study, handbook table). */
+  readonly source: string;
+}
+
+/** How a treatment's capital cost is computed. */
+export type CostModel =
+  | { readonly basis: "per-site"; readonly amount: number }
+  | { readonly basis: "per-km"; readonly amount: number };
+
+/** A countermeasure from a catalogue. */
+export interface Treatment {
+  readonly id: string;
+  readonly name: string;
+  readonly appliesTo: readonly SiteKind[];
+  readonly cost: CostModel;
+  readonly upkeepPerYear: number;
+  readonly serviceLifeYears: number;
+  /** Treatments that share an exclusivity group never share a site. */
+  readonly exclusiveGroup?: string;
+  readonly effects: readonly Effect[];
+  readonly costSource?: string;
+}
+
+/** A safety performance function: predicted crashes per year = exp(a) × AADT^b × lengthKm^c (segments). */
+export interface SafetyPerformanceFunction {
+  readonly id: string;
+  readonly appliesTo: readonly SiteKind[];
+  /** Intercept a of ln(N) = a + b ln(AADT) + c ln(L). */
+  readonly intercept: number;
+  readonly aadtExponent: number;
+  /** Exponent on length in km; 1 (proportional to length) for most segment SPFs. */
+  readonly lengthExponent: number;
+  /** Negative binomial overdispersion k; per km of length when `overdispersionPerKm` is set. */
+  readonly overdispersion: number;
+  readonly overdispersionPerKm: boolean;
+  /** Share of predicted crashes in each crash type × severity cell (sums to 1). */
+  readonly shares: CrashMatrix;
+  readonly source: string;
+}
+
+export interface Catalogue {
+  readonly treatments: readonly Treatment[];
+  readonly performanceFunctions: readonly SafetyPerformanceFunction[];
+}
+
+export interface GeoPoint {
+  readonly lon: number;
+  readonly lat: number;
+}
+
+/** A candidate site with its crash history and candidate treatments. */
+export interface Site {
+  readonly id: string;
+  readonly name: string;
+  readonly kind: SiteKind;
+  readonly district: string;
+  readonly tags: readonly string[];
+  readonly location?: GeoPoint;
+  readonly lengthKm?: number;
+  /** Annual average daily traffic, used by Empirical Bayes. */
+  readonly aadt?: number;
+  /** Which SPF predicts this site's crashes (Empirical Bayes baseline). */
+  readonly performanceFunction?: string;
+  /** Observed crashes over the scenario's crash window. */
+  readonly crashes: CrashMatrix;
+  readonly candidates: readonly string[];
+  /** Capital cost overrides by treatment id. */
+  readonly costOverrides: Readonly<Record<string, number>>;
+}
+
+/** Unit cost of one crash by severity, for monetising benefits. */
+export interface CrashCosts {
+  readonly perCrash: Readonly<Record<Severity, number>>;
+  readonly source: string;
+  readonly priceYear?: number;
+}
+
+export interface Economics {
+  readonly discountRate: number;
+  readonly horizonYears: number;
+  readonly crashCosts: CrashCosts;
+}
+
+export type Objective = "ksi" | "benefit";
+export type BaselineMethod = "observed" | "empirical-bayes";
+
+/** Share of a total that a group of sites must (floor) or may (cap) take. */
+export type PolicyRule =
+  | { readonly kind: "must-fund"; readonly site: string; readonly treatments: readonly string[] }
+  | { readonly kind: "never-fund"; readonly site: string; readonly treatments: readonly string[] }
+  | {
+      readonly kind: "spend-cap" | "spend-floor";
+      readonly district?: string;
+      readonly tag?: string;
+      readonly amount?: number;
+      readonly share?: number;
+    }
+  | { readonly kind: "ksi-share-floor"; readonly district?: string; readonly tag?: string; readonly share: number }
+  | { readonly kind: "max-projects"; readonly district?: string; readonly tag?: string; readonly count: number };
+
+export interface Scenario {
+  readonly name: string;
+  readonly currency: string;
+  readonly budget: number;
+  readonly crashWindow: { readonly firstYear: number; readonly lastYear: number };
+  readonly economics: Economics;
+  readonly objective: Objective;
+  readonly baseline: BaselineMethod;
+  readonly maxTreatmentsPerSite: number;
+  readonly catalogue: Catalogue;
+  readonly sites: readonly Site[];
+  readonly rules: readonly PolicyRule[];
+}
+
+/** One allowed combination of treatments at one site, with its effects and economics. */
+export interface Alternative {
+  readonly site: string;
+  readonly treatments: readonly string[];
+  /** Capital cost, charged to the budget. */
+  readonly cost: number;
+  /** Capital plus present worth of upkeep over each treatment's life within the horizon. */
+  readonly lifecycleCostPV: number;
+  /** Crashes avoided per year in the first year, by severity. */
+  readonly crashesAvoidedPerYear: Readonly<Record<Severity, number>>;
+  /** KSI crashes (K + A) avoided over the service life within the horizon. */
+  readonly ksiAvoided: number;
+  /** Present value of crash costs avoided over the service life within the horizon. */
+  readonly benefitPV: number;
+  readonly bcRatio: number;
+  readonly npv: number;
+  /** Lifecycle cost per KSI crash avoided (Infinity when none is avoided). */
+  readonly costPerKsi: number;
+  /** Years the alternative acts, within the horizon (the longest treatment life, capped). */
+  readonly effectiveYears: number;
+}

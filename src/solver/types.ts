@@ -1,0 +1,78 @@
+/**
+ * The integer program averta solves, as plain numbers: pick at most one option per group
+ * (exactly one when the group is required) so that total value is largest, total cost is
+ * within the budget, and every side constraint holds.
+ */
+
+/** One alternative at one site, reduced to what the optimiser needs. */
+export interface ProgrammeOption {
+  /** Charged against the budget (capital cost). */
+  readonly cost: number;
+  /** What the objective counts (KSI avoided, or benefit PV). */
+  readonly value: number;
+}
+
+/** One site: its options, of which at most one (exactly one if `required`) is chosen. */
+export interface ProgrammeGroup {
+  readonly id: string;
+  readonly options: readonly ProgrammeOption[];
+  readonly required: boolean;
+}
+
+/**
+ * A linear side constraint over the option variables:
+ * sum over groups g and options a of coefficients[g][a] * x[g][a]  (sense)  rhs.
+ * Policy rules (district caps and floors, KSI share floors, project counts) compile to these.
+ */
+export interface SideConstraint {
+  readonly id: string;
+  /** Plain words for reports, e.g. "spend in district North <= 1,200,000". */
+  readonly label: string;
+  readonly sense: "<=" | ">=";
+  readonly rhs: number;
+  /** coefficients[g][a]; a missing row means all zero for that group. */
+  readonly coefficients: readonly (readonly number[] | undefined)[];
+}
+
+/** The prepared optimisation model. */
+export interface Programme {
+  readonly budget: number;
+  readonly groups: readonly ProgrammeGroup[];
+  readonly constraints: readonly SideConstraint[];
+}
+
+export type SolveStatus = "optimal" | "infeasible" | "time-limit";
+
+export type EngineName = "auto" | "exact" | "lp-solver" | "highs";
+
+export interface SolveOptions {
+  readonly engine: EngineName;
+  /** Wall-clock limit in seconds for engines that honour one. */
+  readonly timeLimitSeconds: number;
+  /** Relative gap at which the search may stop and still report `optimal` (0 = proven exact). */
+  readonly relativeGap: number;
+}
+
+export const DEFAULT_SOLVE_OPTIONS: Required<SolveOptions> = {
+  engine: "auto",
+  timeLimitSeconds: 60,
+  relativeGap: 0,
+};
+
+/** What every engine returns. Outcomes are statuses, never exceptions. */
+export interface Solution {
+  readonly status: SolveStatus;
+  /** Index of the chosen option in each group, or null for none. */
+  readonly choice: readonly (number | null)[];
+  readonly objective: number;
+  readonly cost: number;
+  /** Upper bound on the optimum (LP relaxation or better). */
+  readonly bound: number;
+  /** (bound - objective) / max(1, |bound|). */
+  readonly gap: number;
+  /** Objective gained per extra currency unit of budget at the LP optimum (0 if the budget is slack). */
+  readonly budgetMarginalValue: number;
+  readonly engine: Exclude<EngineName, "auto">;
+  /** Why the model is infeasible, in plain words, when it is. */
+  readonly diagnosis?: string;
+}

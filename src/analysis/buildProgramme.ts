@@ -1,0 +1,94 @@
+import type { SiteAlternatives } from "../model/buildAlternatives.js";
+import type { Alternative, Objective, PolicyRule, Site } from "../model/types.js";
+import type { Programme, SideConstraint } from "../solver/types.js";
+
+/** What the optimiser maximises for one alternative. */
+export function objectiveValue(alternative: Alternative, objective: Objective): number {
+  return objective === "ksi" ? alternative.ksiAvoided : alternative.benefitPV;
+}
+
+/**
+ * The integer program for a scenario: one group per site (required under a must-fund rule),
+ * its alternatives as options, and one side constraint per spending, KSI-share or count rule.
+ */
+export function buildProgramme(
+  sites: readonly SiteAlternatives[],
+  rules: readonly PolicyRule[],
+  objective: Objective,
+  budget: number,
+): Programme {
+  return {
+    budget,
+    groups: sites.map((entry) => ({
+      id: entry.site.id,
+      required: entry.required,
+      options: entry.alternatives.map((alternative) => ({ cost: alternative.cost, value: objectiveValue(alternative, objective) })),
+    })),
+    constraints: rules.flatMap((rule, index) => sideConstraint(rule, index, sites)),
+  };
+}
+
+function covers(rule: { district?: string; tag?: string }, site: Site): boolean {
+  if (rule.district !== undefined) return site.district === rule.district;
+  if (rule.tag !== undefined) return site.tags.includes(rule.tag);
+  return true;
+}
+
+function scopeLabel(rule: { district?: string; tag?: string }): string {
+  if (rule.district !== undefined) return `district ${rule.district}`;
+  if (rule.tag !== undefined) return `sites tagged ${rule.tag}`;
+  return "all sites";
+}
+
+function sideConstraint(rule: PolicyRule, index: number, sites: readonly SiteAlternatives[]): SideConstraint[] {
+  const id = `rule-${index + 1}-${rule.kind}`;
+  // coefficient(alternative, inScope): one row entry per option of every group.
+  const row = (coefficient: (alternative: Alternative, inScope: boolean) => number) =>
+    sites.map((entry) => {
+      const inScope = rule.kind !== "must-fund" && rule.kind !== "never-fund" && covers(rule, entry.site);
+      return entry.alternatives.map((alternative) => coefficient(alternative, inScope));
+    });
+  switch (rule.kind) {
+    case "must-fund":
+    case "never-fund":
+      return []; // applied when the alternatives were built
+    case "spend-cap":
+    case "spend-floor": {
+      const sense = rule.kind === "spend-cap" ? "<=" : ">=";
+      const word = rule.kind === "spend-cap" ? "at most" : "at least";
+      if (rule.share !== undefined) {
+        const share = rule.share;
+        return [{
+          id,
+          label: `spend in ${scopeLabel(rule)} ${word} ${(share * 100).toFixed(1)}% of total spend`,
+          sense,
+          rhs: 0,
+          coefficients: row((alternative, inScope) => (inScope ? alternative.cost : 0) - share * alternative.cost),
+        }];
+      }
+      return [{
+        id,
+        label: `spend in ${scopeLabel(rule)} ${word} ${rule.amount ?? 0}`,
+        sense,
+        rhs: rule.amount ?? 0,
+        coefficients: row((alternative, inScope) => (inScope ? alternative.cost : 0)),
+      }];
+    }
+    case "ksi-share-floor":
+      return [{
+        id,
+        label: `KSI avoided in ${scopeLabel(rule)} at least ${(rule.share * 100).toFixed(1)}% of all KSI avoided`,
+        sense: ">=",
+        rhs: 0,
+        coefficients: row((alternative, inScope) => (inScope ? alternative.ksiAvoided : 0) - rule.share * alternative.ksiAvoided),
+      }];
+    case "max-projects":
+      return [{
+        id,
+        label: `at most ${rule.count} project(s) in ${scopeLabel(rule)}`,
+        sense: "<=",
+        rhs: rule.count,
+        coefficients: row((_alternative, inScope) => (inScope ? 1 : 0)),
+      }];
+  }
+}

@@ -1,0 +1,47 @@
+import type { SiteAlternatives } from "../model/buildAlternatives.js";
+import type { Alternative } from "../model/types.js";
+import { solveProgramme } from "../solver/solveProgramme.js";
+import type { Programme, Solution, SolveOptions } from "../solver/types.js";
+import { buildProgramme } from "./buildProgramme.js";
+import type { PreparedPlan } from "./preparePlan.js";
+import { summariseSelection, type ProgrammeTotals } from "./summariseSelection.js";
+
+/** One funded project: a site and the alternative chosen there. */
+export interface FundedProject {
+  readonly entry: SiteAlternatives;
+  readonly alternative: Alternative;
+  /** Index of the alternative within its site's alternatives. */
+  readonly index: number;
+}
+
+/** The optimal capital list at one budget, with what it achieves. */
+export interface PlanResult {
+  readonly prepared: PreparedPlan;
+  readonly budget: number;
+  readonly programme: Programme;
+  readonly solution: Solution;
+  readonly funded: readonly FundedProject[];
+  readonly totals: ProgrammeTotals;
+}
+
+/** Solves the prepared scenario at `budget` and gathers the funded projects and totals. */
+export async function planProgramme(
+  prepared: PreparedPlan,
+  budget: number = prepared.scenario.budget,
+  solveOptions: Partial<SolveOptions> = {},
+): Promise<PlanResult> {
+  const programme = buildProgramme(prepared.sites, prepared.scenario.rules, prepared.objective, budget);
+  const solution = await solveProgramme(programme, solveOptions);
+  return assemblePlan(prepared, budget, programme, solution);
+}
+
+/** Turns a solver's choice vector back into funded projects and totals. */
+export function assemblePlan(prepared: PreparedPlan, budget: number, programme: Programme, solution: Solution): PlanResult {
+  const funded: FundedProject[] = [];
+  solution.choice.forEach((index, group) => {
+    if (index === null) return;
+    const entry = prepared.sites[group]!;
+    funded.push({ entry, alternative: entry.alternatives[index]!, index });
+  });
+  return { prepared, budget, programme, solution, funded, totals: summariseSelection(funded.map((project) => project.alternative)) };
+}

@@ -1,0 +1,50 @@
+import type { Command } from "commander";
+import { preparePlan } from "../../analysis/preparePlan.js";
+import { formatProblem } from "../../io/InputError.js";
+import { loadScenario } from "../../io/loadScenario.js";
+import { sumCrashMatrix } from "../../model/crashMatrix.js";
+import { KSI_SEVERITIES } from "../../model/types.js";
+import { formatFixed, formatMoney } from "../../report/formatNumber.js";
+import type { CliIo } from "../CliIo.js";
+
+/** `averta check <scenario>`: validate the files and summarise what the optimiser will see. */
+export function registerCheckCommand(program: Command, io: CliIo): void {
+  program
+    .command("check")
+    .description("validate a scenario and its catalogues, and summarise sites, alternatives and crashes")
+    .argument("<scenario>", "scenario YAML file")
+    .action((file: string) => {
+      const loaded = loadScenario(file);
+      const { scenario } = loaded;
+      const prepared = preparePlan(scenario);
+      const alternatives = prepared.sites.reduce((total, entry) => total + entry.alternatives.length, 0);
+      const crashes = scenario.sites.reduce((total, site) => total + sumCrashMatrix(site.crashes), 0);
+      const ksi = scenario.sites.reduce((total, site) => total + sumCrashMatrix(site.crashes, KSI_SEVERITIES), 0);
+      const byKind = (kind: string) => scenario.sites.filter((site) => site.kind === kind).length;
+      const lines = [
+        `${file}: valid`,
+        `  scenario       ${scenario.name}`,
+        `  sites          ${scenario.sites.length} (${byKind("intersection")} intersections, ${byKind("segment")} segments, ${byKind("corridor")} corridors) in ${new Set(scenario.sites.map((s) => s.district)).size} district(s)`,
+        `  treatments     ${scenario.catalogue.treatments.length} in ${loaded.catalogues.length} catalogue(s)`,
+        `  alternatives   ${alternatives} (up to ${scenario.maxTreatmentsPerSite} treatments per site)`,
+        `  crashes        ${crashes} in ${scenario.crashWindow.firstYear}-${scenario.crashWindow.lastYear}, of which KSI (K+A) ${ksi} (${formatFixed(ksi / (scenario.crashWindow.lastYear - scenario.crashWindow.firstYear + 1), 1)} a year)`,
+        `  budget         ${formatMoney(scenario.budget)} ${scenario.currency}`,
+        `  rules          ${scenario.rules.length}`,
+        `  warnings       ${loaded.warnings.length}`,
+      ];
+      io.stdout(lines.join("\n") + "\n");
+      if (loaded.warnings.length > 0) io.stderr(summariseWarnings(loaded.warnings.map((w) => ({ code: w.code, text: formatProblem(w) }))));
+    });
+}
+
+/** Prints every warning, except that long runs of one kind are cut to a few examples. */
+function summariseWarnings(warnings: readonly { code: string; text: string }[]): string {
+  const byCode = new Map<string, string[]>();
+  for (const warning of warnings) byCode.set(warning.code, [...(byCode.get(warning.code) ?? []), warning.text]);
+  const lines: string[] = [];
+  for (const [, texts] of byCode) {
+    for (const text of texts.slice(0, 5)) lines.push(`warning: ${text}`);
+    if (texts.length > 5) lines.push(`warning: … and ${texts.length - 5} more like these`);
+  }
+  return lines.join("\n") + "\n";
+}

@@ -1,0 +1,49 @@
+import type { Command } from "commander";
+import { planProgramme } from "../../analysis/planProgramme.js";
+import { preparePlan } from "../../analysis/preparePlan.js";
+import { loadScenario } from "../../io/loadScenario.js";
+import type { Objective } from "../../model/types.js";
+import { planCsv } from "../../report/planCsv.js";
+import { planJson } from "../../report/planJson.js";
+import { planTable } from "../../report/planTable.js";
+import type { EngineName } from "../../solver/types.js";
+import type { CliIo } from "../CliIo.js";
+import { emitOutput } from "../emitOutput.js";
+import { parseAmountOption, parseChoiceOption } from "../parseOptionValues.js";
+
+export const ENGINES: readonly EngineName[] = ["auto", "exact", "lp-solver", "highs"];
+export const FORMATS = ["table", "json", "csv"] as const;
+
+interface PlanOptions {
+  budget?: string;
+  objective?: string;
+  format: string;
+  out?: string;
+  force?: boolean;
+  engine: string;
+}
+
+/** `averta plan <scenario>`: the optimal capital list within the budget. */
+export function registerPlanCommand(program: Command, io: CliIo): void {
+  program
+    .command("plan")
+    .description("choose the treatments to fund that avoid the most KSI crashes within the budget")
+    .argument("<scenario>", "scenario YAML file")
+    .option("-b, --budget <amount>", "budget to use instead of the scenario's (4500000, 4.5M, 750k)")
+    .option("--objective <what>", "ksi (KSI crashes avoided) or benefit (monetised benefit PV)")
+    .option("-f, --format <format>", "table, json or csv", "table")
+    .option("-o, --out <file>", "write to this file instead of standard output")
+    .option("--force", "replace --out if it already exists")
+    .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
+    .action(async (file: string, options: PlanOptions) => {
+      const format = parseChoiceOption("--format", options.format, FORMATS);
+      const engine = parseChoiceOption("--engine", options.engine, ENGINES);
+      const objective = options.objective === undefined ? undefined : parseChoiceOption<Objective>("--objective", options.objective, ["ksi", "benefit"]);
+      const budget = options.budget === undefined ? undefined : parseAmountOption("--budget", options.budget);
+      const { scenario } = loadScenario(file);
+      const result = await planProgramme(preparePlan(scenario, objective), budget ?? scenario.budget, { engine });
+      const content =
+        format === "json" ? JSON.stringify(planJson(result), null, 2) + "\n" : format === "csv" ? planCsv(result) : planTable(result);
+      emitOutput(io, content, options.out, options.force === true);
+    });
+}

@@ -1,0 +1,50 @@
+import { Command, CommanderError } from "commander";
+import { InputError, formatProblem } from "../io/InputError.js";
+import type { CliIo } from "./CliIo.js";
+import { registerCheckCommand } from "./commands/checkCommand.js";
+import { registerPlanCommand } from "./commands/planCommand.js";
+
+/** Exit codes: 0 success, 1 internal fault, 2 bad input or usage. */
+export const EXIT_OK = 0;
+export const EXIT_FAULT = 1;
+export const EXIT_BAD_INPUT = 2;
+
+/** Builds the command tree; every command writes through `io`. */
+export function createProgram(io: CliIo): Command {
+  const program = new Command("averta")
+    .description("Choose the road-safety capital list that avoids the most killed and seriously injured (KSI) crashes within budget.")
+    .version("0.1.0")
+    .showHelpAfterError("(run with --help for usage)")
+    .configureOutput({ writeOut: io.stdout, writeErr: io.stderr })
+    .exitOverride();
+  registerCheckCommand(program, io);
+  registerPlanCommand(program, io);
+  for (const command of program.commands) command.exitOverride().configureOutput({ writeOut: io.stdout, writeErr: io.stderr });
+  return program;
+}
+
+/**
+ * Runs averta with `argv` (without the node and script entries) and returns the exit code.
+ * The only place that turns errors into messages: bad input prints located problems, a fault
+ * prints one line (the stack only with AVERTA_DEBUG=1).
+ */
+export async function runCli(argv: readonly string[], io: CliIo): Promise<number> {
+  const program = createProgram(io);
+  try {
+    await program.parseAsync([...argv], { from: "user" });
+    return EXIT_OK;
+  } catch (error) {
+    if (error instanceof InputError) {
+      io.stderr(error.problems.map((problem) => `error: ${formatProblem(problem)}`).join("\n") + "\n");
+      return EXIT_BAD_INPUT;
+    }
+    if (error instanceof CommanderError) {
+      if (error.code === "commander.helpDisplayed" || error.code === "commander.version" || error.code === "commander.help") return EXIT_OK;
+      return EXIT_BAD_INPUT; // commander has already printed the usage problem
+    }
+    const message = error instanceof Error ? error.message : String(error);
+    io.stderr(`internal error: ${message}\nThis is a fault in averta, not in your files; please report it with the command you ran.\n`);
+    if (process.env.AVERTA_DEBUG === "1" && error instanceof Error) io.stderr(`${error.stack}\n`);
+    return EXIT_FAULT;
+  }
+}

@@ -1,0 +1,184 @@
+import { dirname, resolve } from "node:path";
+import { completeCrashMatrix } from "../model/crashMatrix.js";
+import type {
+  BaselineMethod,
+  Catalogue,
+  CrashType,
+  Objective,
+  PolicyRule,
+  Scenario,
+  Severity,
+  Site,
+  SiteKind,
+} from "../model/types.js";
+import { checkScenarioReferences } from "./checkScenarioReferences.js";
+import { InputError, type InputProblem } from "./InputError.js";
+import { loadCatalogue, type LoadedCatalogue } from "./loadCatalogue.js";
+import { parseAmount } from "./parseAmount.js";
+import { readYamlFile, type YamlSource } from "./readYamlFile.js";
+import { scenarioWarnings } from "./scenarioWarnings.js";
+import { validateWithSchema } from "./validateWithSchema.js";
+
+type Amount = number | string;
+interface RawSite {
+  id: string;
+  name: string;
+  kind: SiteKind;
+  district: string;
+  tags?: string[];
+  location?: { lon: number; lat: number };
+  lengthKm?: number;
+  aadt?: number;
+  performanceFunction?: string;
+  crashes: Partial<Record<CrashType, Partial<Record<Severity, number>>>>;
+  candidates: string[];
+  costOverrides?: Record<string, Amount>;
+}
+interface Selector {
+  district?: string;
+  tag?: string;
+}
+/** The scenario file as written, after schema validation. */
+export interface RawScenario {
+  name: string;
+  catalogues: string[];
+  currency: string;
+  budget: Amount;
+  crashWindow: { firstYear: number; lastYear: number };
+  economics: {
+    discountRate: number;
+    horizonYears: number;
+    crashCosts: Record<Severity, Amount> & { source: string; priceYear?: number };
+  };
+  objective?: Objective;
+  baseline?: BaselineMethod;
+  maxTreatmentsPerSite?: number;
+  rules?: {
+    mustFund?: { site: string; treatments?: string[] }[];
+    neverFund?: { site: string; treatments?: string[] }[];
+    spendCaps?: (Selector & { amount?: Amount; share?: number })[];
+    spendFloors?: (Selector & { amount?: Amount; share?: number })[];
+    ksiShareFloors?: (Selector & { share: number })[];
+    maxProjects?: (Selector & { count: number })[];
+  };
+  sites: RawSite[];
+}
+
+/** A scenario ready for the model, with the problems worth a warning and the files it read. */
+export interface LoadedScenario {
+  readonly scenario: Scenario;
+  readonly warnings: readonly InputProblem[];
+  readonly source: YamlSource;
+  readonly catalogues: readonly LoadedCatalogue[];
+}
+
+export const DEFAULT_MAX_TREATMENTS_PER_SITE = 3;
+
+/**
+ * Reads a scenario and the catalogues it names, validates both against their schemas and
+ * against each other, and converts them to the model's types. Throws InputError on bad input.
+ */
+export function loadScenario(file: string): LoadedScenario {
+  const source = readYamlFile(file);
+  const schemaProblems = validateWithSchema(source, "scenario");
+  if (schemaProblems.length > 0) throw new InputError(schemaProblems);
+  const raw = source.data as RawScenario;
+
+  const catalogues = raw.catalogues.map((path, index) => {
+    try {
+      return loadCatalogue(resolve(dirname(file), path), path);
+    } catch (error) {
+      if (error instanceof InputError && error.code === "missing-file") {
+        throw new InputError([
+          {
+            ...error.problems[0]!,
+            file: source.file,
+            ...source.positionOf(["catalogues", index]),
+            path: `catalogues[${index}]`,
+            message: `catalogue '${path}' was not found (looked in ${resolve(dirname(file), path)})`,
+            hint: "catalogue paths are relative to the scenario file",
+          },
+        ]);
+      }
+      throw error;
+    }
+  });
+  const catalogue: Catalogue = {
+    treatments: catalogues.flatMap((loaded) => loaded.catalogue.treatments),
+    performanceFunctions: catalogues.flatMap((loaded) => loaded.catalogue.performanceFunctions),
+  };
+
+  const problems = checkScenarioReferences(raw, source, catalogues);
+  if (problems.length > 0) throw new InputError(problems);
+
+  const scenario = toScenario(raw, catalogue);
+  return { scenario, source, catalogues, warnings: scenarioWarnings(scenario, raw, source, catalogues) };
+}
+
+function amount(value: Amount): number {
+  // The schema and reference checks have already rejected anything parseAmount refuses.
+  return parseAmount(value)!;
+}
+
+function toScenario(raw: RawScenario, catalogue: Catalogue): Scenario {
+  const costs = raw.economics.crashCosts;
+  return {
+    name: raw.name,
+    currency: raw.currency,
+    budget: amount(raw.budget),
+    crashWindow: raw.crashWindow,
+    economics: {
+      discountRate: raw.economics.discountRate,
+      horizonYears: raw.economics.horizonYears,
+      crashCosts: {
+        perCrash: { K: amount(costs.K), A: amount(costs.A), B: amount(costs.B), C: amount(costs.C), O: amount(costs.O) },
+        source: costs.source,
+        ...(costs.priceYear !== undefined && { priceYear: costs.priceYear }),
+      },
+    },
+    objective: raw.objective ?? "ksi",
+    baseline: raw.baseline ?? "observed",
+    maxTreatmentsPerSite: raw.maxTreatmentsPerSite ?? DEFAULT_MAX_TREATMENTS_PER_SITE,
+    catalogue,
+    sites: raw.sites.map(toSite),
+    rules: toRules(raw.rules ?? {}),
+  };
+}
+
+function toSite(raw: RawSite): Site {
+  return {
+    id: raw.id,
+    name: raw.name,
+    kind: raw.kind,
+    district: raw.district,
+    tags: raw.tags ?? [],
+    ...(raw.location !== undefined && { location: raw.location }),
+    ...(raw.lengthKm !== undefined && { lengthKm: raw.lengthKm }),
+    ...(raw.aadt !== undefined && { aadt: raw.aadt }),
+    ...(raw.performanceFunction !== undefined && { performanceFunction: raw.performanceFunction }),
+    crashes: completeCrashMatrix(raw.crashes),
+    candidates: raw.candidates,
+    costOverrides: Object.fromEntries(Object.entries(raw.costOverrides ?? {}).map(([id, value]) => [id, amount(value)])),
+  };
+}
+
+function selector(raw: Selector): Selector {
+  return { ...(raw.district !== undefined && { district: raw.district }), ...(raw.tag !== undefined && { tag: raw.tag }) };
+}
+
+function toRules(raw: NonNullable<RawScenario["rules"]>): PolicyRule[] {
+  const spend = (kind: "spend-cap" | "spend-floor") => (rule: Selector & { amount?: Amount; share?: number }): PolicyRule => ({
+    kind,
+    ...selector(rule),
+    ...(rule.amount !== undefined && { amount: amount(rule.amount) }),
+    ...(rule.share !== undefined && { share: rule.share }),
+  });
+  return [
+    ...(raw.mustFund ?? []).map((rule): PolicyRule => ({ kind: "must-fund", site: rule.site, treatments: rule.treatments ?? [] })),
+    ...(raw.neverFund ?? []).map((rule): PolicyRule => ({ kind: "never-fund", site: rule.site, treatments: rule.treatments ?? [] })),
+    ...(raw.spendCaps ?? []).map(spend("spend-cap")),
+    ...(raw.spendFloors ?? []).map(spend("spend-floor")),
+    ...(raw.ksiShareFloors ?? []).map((rule): PolicyRule => ({ kind: "ksi-share-floor", ...selector(rule), share: rule.share })),
+    ...(raw.maxProjects ?? []).map((rule): PolicyRule => ({ kind: "max-projects", ...selector(rule), count: rule.count })),
+  ];
+}

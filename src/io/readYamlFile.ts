@@ -1,0 +1,170 @@
+import { readFileSync, statSync } from "node:fs";
+import { isMap, isScalar, LineCounter, parseDocument, type Document, type Node } from "yaml";
+import { InputError, type InputProblem } from "./InputError.js";
+
+/** Largest input file we read: a programme of 100,000 sites fits well below it. */
+export const MAX_INPUT_BYTES = 64 * 1024 * 1024;
+/** Alias expansions allowed when converting YAML to data (guards against alias bombs). */
+const MAX_ALIAS_COUNT = 1000;
+
+export type PathSegment = string | number;
+
+/** A parsed YAML file that can map a field path back to its line and column. */
+export interface YamlSource {
+  readonly file: string;
+  readonly data: unknown;
+  /** 1-based line and column of the node at `path`, or of its nearest existing ancestor. */
+  positionOf(path: readonly PathSegment[], key?: boolean): { line: number; column: number };
+}
+
+/**
+ * Reads and parses one YAML file. Every failure (missing, unreadable, not UTF-8, too large,
+ * syntax error, duplicate key, alias bomb, nesting too deep) is an InputError with a position.
+ */
+export function readYamlFile(file: string, label: string = file): YamlSource {
+  const text = readUtf8(file, label);
+  const lineCounter = new LineCounter();
+  const doc = parseDocument(text, { lineCounter, uniqueKeys: true, prettyErrors: false, strict: true });
+  const problems: InputProblem[] = doc.errors.map((error) => {
+    const { line, col } = lineCounter.linePos(error.pos[0]);
+    return {
+      code: error.code === "DUPLICATE_KEY" ? "duplicate-key" : "yaml-syntax",
+      file: label,
+      line,
+      column: col,
+      message: firstLine(error.message),
+      hint: yamlHint(error.code, text, error.pos[0]),
+    };
+  });
+  if (problems.length > 0) throw new InputError(problems);
+
+  let data: unknown;
+  try {
+    data = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    const tooDeep = error instanceof RangeError;
+    throw new InputError([
+      {
+        code: tooDeep ? "too-deep" : "yaml-aliases",
+        file: label,
+        line: 1,
+        column: 1,
+        message: tooDeep ? "the document is nested too deeply to read" : firstLine(message),
+        hint: tooDeep
+          ? "a scenario needs only a few levels of nesting; check for runaway indentation"
+          : "anchors and aliases expand to too much data; write the values out instead",
+      },
+    ]);
+  }
+  return {
+    file: label,
+    data,
+    positionOf: (path, key = false) => positionOf(doc, lineCounter, path, key),
+  };
+}
+
+function readUtf8(file: string, label: string): string {
+  let bytes: Buffer;
+  try {
+    const stats = statSync(file);
+    if (stats.isDirectory()) {
+      throw new InputError([{ code: "not-a-file", file: label, message: "is a folder, not a file", hint: "name a .yaml file" }]);
+    }
+    if (stats.size > MAX_INPUT_BYTES) {
+      throw new InputError([
+        {
+          code: "too-large",
+          file: label,
+          message: `is ${(stats.size / 1048576).toFixed(1)} MiB, over the ${MAX_INPUT_BYTES / 1048576} MiB limit`,
+          hint: "split the sites across scenarios or check that this is the right file",
+        },
+      ]);
+    }
+    bytes = readFileSync(file);
+  } catch (error) {
+    if (error instanceof InputError) throw error;
+    const code = (error as NodeJS.ErrnoException).code;
+    throw new InputError([
+      {
+        code: "missing-file",
+        file: label,
+        message: code === "ENOENT" ? "file not found" : `cannot be read (${code ?? "unknown error"})`,
+        hint: code === "ENOENT" ? "check the path; relative paths in a scenario are relative to the scenario file" : "check its permissions",
+      },
+    ]);
+  }
+  try {
+    return new TextDecoder("utf-8", { fatal: true }).decode(bytes).replace(/^\uFEFF/, "");
+  } catch {
+    const offset = firstInvalidUtf8Offset(bytes);
+    const before = bytes.subarray(0, offset).toString("latin1");
+    const line = before.split("\n").length;
+    const column = offset - before.lastIndexOf("\n");
+    throw new InputError([
+      {
+        code: "not-utf8",
+        file: label,
+        line,
+        column,
+        message: "is not valid UTF-8 text",
+        hint: "save the file as UTF-8 (most editors offer this under 'Save with encoding')",
+      },
+    ]);
+  }
+}
+
+function firstInvalidUtf8Offset(bytes: Buffer): number {
+  const decoder = new TextDecoder("utf-8", { fatal: true });
+  let low = 0;
+  let high = bytes.length;
+  // Binary search for the shortest invalid prefix; a cut mid-character is tolerated by trimming 3 bytes.
+  while (low < high) {
+    const mid = (low + high) >> 1;
+    try {
+      decoder.decode(bytes.subarray(0, Math.max(0, mid - 3)));
+      low = mid + 1;
+    } catch {
+      high = mid;
+    }
+  }
+  return Math.max(0, low - 4);
+}
+
+function firstLine(message: string): string {
+  return message.split("\n")[0]!.replace(/ at line \d+, column \d+:?$/, "");
+}
+
+function yamlHint(code: string, text: string, offset: number): string | undefined {
+  const lineStart = text.lastIndexOf("\n", offset - 1) + 1;
+  const lineText = text.slice(lineStart, text.indexOf("\n", offset) === -1 ? undefined : text.indexOf("\n", offset));
+  if (/^\s*\t/.test(lineText) || code === "TAB_AS_INDENT") return "YAML indentation must use spaces, not tabs";
+  if (code === "DUPLICATE_KEY") return "each key may appear once in a mapping; remove or rename the repeat";
+  if (code === "BAD_INDENT" || code === "MISSING_CHAR") return "check the indentation and the ':' after each key";
+  return "check the YAML syntax near this position";
+}
+
+function positionOf(
+  doc: Document,
+  lineCounter: LineCounter,
+  path: readonly PathSegment[],
+  key: boolean,
+): { line: number; column: number } {
+  for (let depth = path.length; depth >= 0; depth--) {
+    const prefix = path.slice(0, depth);
+    const node = (prefix.length === 0 ? doc.contents : doc.getIn(prefix, true)) as Node | undefined;
+    let offset = node?.range?.[0];
+    if (key && depth === path.length && depth > 0) {
+      const parent = (depth === 1 ? doc.contents : doc.getIn(path.slice(0, depth - 1), true)) as Node | undefined;
+      if (isMap(parent)) {
+        const pair = parent.items.find((item) => isScalar(item.key) && item.key.value === path[depth - 1]);
+        if (pair && isScalar(pair.key)) offset = pair.key.range?.[0];
+      }
+    }
+    if (offset !== undefined) {
+      const { line, col } = lineCounter.linePos(offset);
+      return { line, column: col };
+    }
+  }
+  return { line: 1, column: 1 };
+}

@@ -1,0 +1,51 @@
+import { sumCrashMatrix } from "../model/crashMatrix.js";
+import type { Scenario } from "../model/types.js";
+import type { InputProblem } from "./InputError.js";
+import type { LoadedCatalogue } from "./loadCatalogue.js";
+import type { RawScenario } from "./loadScenario.js";
+import type { YamlSource } from "./readYamlFile.js";
+
+/** Years of crash data below which counts are too noisy to rank sites (common practice: 3 to 5 years). */
+export const MIN_RECOMMENDED_WINDOW_YEARS = 3;
+
+/** Things that are allowed but deserve a second look before the list goes to finance. */
+export function scenarioWarnings(
+  scenario: Scenario,
+  raw: RawScenario,
+  source: YamlSource,
+  catalogues: readonly LoadedCatalogue[],
+): InputProblem[] {
+  const warnings: InputProblem[] = [];
+  const years = scenario.crashWindow.lastYear - scenario.crashWindow.firstYear + 1;
+  if (years < MIN_RECOMMENDED_WINDOW_YEARS) {
+    warnings.push({
+      code: "short-window",
+      file: source.file,
+      ...source.positionOf(["crashWindow"]),
+      path: "crashWindow",
+      message: `the crash window covers ${years} year(s); common practice is 3 to 5 years`,
+      hint: "short windows overstate sites with a chance bad year (regression to the mean)",
+    });
+  }
+  const used = new Set(scenario.sites.flatMap((site) => site.candidates));
+  for (const loaded of catalogues) {
+    loaded.catalogue.treatments.forEach((treatment, index) => {
+      if (!used.has(treatment.id)) return;
+      treatment.effects.forEach((effect, effectIndex) => {
+        const at = { file: loaded.source.file, ...loaded.source.positionOf(["treatments", index, "effects", effectIndex, "cmf"]), path: `treatments[${index}].effects[${effectIndex}].cmf` };
+        if (effect.cmf > 1) {
+          warnings.push({ code: "cmf-above-one", ...at, message: `'${treatment.id}' has CMF ${effect.cmf} > 1: it is expected to increase these crashes`, hint: "intended for a trade-off treatment; otherwise check the value" });
+        }
+        if (effect.standardError === undefined) {
+          warnings.push({ code: "missing-standard-error", ...at, message: `'${treatment.id}' has no standard error for its CMF ${effect.cmf}`, hint: "uncertainty analysis will treat this CMF as exact" });
+        }
+      });
+    });
+  }
+  raw.sites.forEach((site, index) => {
+    if (sumCrashMatrix(scenario.sites[index]!.crashes) === 0) {
+      warnings.push({ code: "no-crashes", file: source.file, ...source.positionOf(["sites", index, "crashes"]), path: `sites[${index}].crashes`, message: `site '${site.id}' has no recorded crashes, so no treatment there can avoid any`, hint: "check the crash assignment, or use an Empirical Bayes baseline" });
+    }
+  });
+  return warnings;
+}

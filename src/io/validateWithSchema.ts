@@ -1,0 +1,135 @@
+import { readFileSync } from "node:fs";
+import { join } from "node:path";
+import { Ajv, type ErrorObject, type ValidateFunction } from "ajv";
+import { closestName } from "./closestName.js";
+import { formatFieldPath, parseJsonPointer } from "./fieldPath.js";
+import type { InputProblem } from "./InputError.js";
+import { packageRoot } from "./packageRoot.js";
+import type { YamlSource } from "./readYamlFile.js";
+
+export type SchemaName = "scenario" | "catalogue";
+
+const compiled = new Map<SchemaName, ValidateFunction>();
+
+function validatorFor(name: SchemaName): ValidateFunction {
+  let validate = compiled.get(name);
+  if (!validate) {
+    const schema = JSON.parse(readFileSync(join(packageRoot(), "schema", `${name}.schema.json`), "utf8"));
+    validate = new Ajv({ allErrors: true, strict: false }).compile(schema);
+    compiled.set(name, validate);
+  }
+  return validate;
+}
+
+/** Validates parsed YAML against one of averta's JSON Schemas; returns located problems (empty if valid). */
+export function validateWithSchema(source: YamlSource, name: SchemaName): InputProblem[] {
+  const validate = validatorFor(name);
+  if (validate(source.data)) return [];
+  const seen = new Set<string>();
+  const problems: InputProblem[] = [];
+  for (const error of validate.errors ?? []) {
+    const problem = describe(error, source);
+    const key = `${problem.path}|${problem.line}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    problems.push(problem);
+  }
+  return problems;
+}
+
+function describe(error: ErrorObject, source: YamlSource): InputProblem {
+  const path = parseJsonPointer(error.instancePath);
+  const params = error.params as Record<string, unknown>;
+  const description = (error.parentSchema as { description?: string } | undefined)?.description;
+  const base = { code: "schema", file: source.file };
+  const at = (segments: typeof path, key = false) => ({ ...source.positionOf(segments, key), path: formatFieldPath(segments) || "(top level)" });
+
+  switch (error.keyword) {
+    case "required": {
+      const missing = String(params.missingProperty);
+      return { ...base, ...at(path), message: `missing required field '${missing}'`, hint: `add '${missing}:' here` };
+    }
+    case "additionalProperties": {
+      const field = String(params.additionalProperty);
+      const allowed = Object.keys((error.parentSchema as { properties?: object }).properties ?? {});
+      const guess = closestName(field, allowed);
+      return {
+        ...base,
+        ...at([...path, field], true),
+        message: `unknown field '${field}'`,
+        hint: guess ? `did you mean '${guess}'?` : `allowed fields: ${allowed.join(", ")}`,
+      };
+    }
+    case "enum": {
+      const allowed = (params.allowedValues as unknown[]).map(String);
+      const value = String(valueAt(source.data, path));
+      const guess = closestName(value, allowed);
+      return {
+        ...base,
+        ...at(path),
+        message: `'${value}' is not allowed`,
+        hint: guess ? `did you mean '${guess}'? (one of: ${allowed.join(", ")})` : `use one of: ${allowed.join(", ")}`,
+      };
+    }
+    case "type":
+      return {
+        ...base,
+        ...at(path),
+        message: `must be ${article(String(params.type))}, found ${describeValue(valueAt(source.data, path))}`,
+        hint: description,
+      };
+    case "pattern":
+      return { ...base, ...at(path), message: `'${String(valueAt(source.data, path))}' has the wrong form`, hint: description };
+    case "minimum":
+    case "maximum":
+    case "exclusiveMinimum":
+    case "exclusiveMaximum":
+      return {
+        ...base,
+        ...at(path),
+        message: `must be ${String(params.comparison)} ${String(params.limit)}, found ${String(valueAt(source.data, path))}`,
+        hint: description,
+      };
+    case "minItems":
+      return { ...base, ...at(path), message: `must list at least ${String(params.limit)} item(s)`, hint: description };
+    case "uniqueItems":
+      return {
+        ...base,
+        ...at([...path, Number(params.j)]),
+        message: `repeats an item (positions ${String(params.j)} and ${String(params.i)})`,
+        hint: "list each item once",
+      };
+    case "minProperties":
+    case "maxProperties":
+      return { ...base, ...at(path), message: `has the wrong number of fields`, hint: description };
+    default:
+      return { ...base, ...at(path), message: error.message ?? "is not valid", hint: description };
+  }
+}
+
+function valueAt(data: unknown, path: readonly (string | number)[]): unknown {
+  let value = data;
+  for (const segment of path) value = (value as Record<string | number, unknown> | undefined)?.[segment];
+  return value;
+}
+
+function describeValue(value: unknown): string {
+  if (value === null || value === undefined) return "nothing";
+  if (Array.isArray(value)) return "a list";
+  if (typeof value === "object") return "a mapping";
+  if (typeof value === "string") return `text '${value.length > 40 ? value.slice(0, 40) + "…" : value}'`;
+  return `${typeof value} ${String(value)}`;
+}
+
+function article(type: string): string {
+  const names: Record<string, string> = {
+    number: "a number",
+    integer: "a whole number",
+    string: "text",
+    object: "a mapping (key: value lines)",
+    array: "a list",
+    boolean: "true or false",
+    "number,string": "a number or an amount like 4.5M",
+  };
+  return names[type] ?? type;
+}

@@ -1,0 +1,16 @@
+import { treatmentCmf } from "./treatmentCmf.js";
+import type { CrashType, Severity, Treatment } from "./types.js";
+
+/** How the CMFs of treatments applied together are combined; stated in every output. */
+export const CMF_COMBINATION_RULE =
+  "multiplicative: the CMFs of treatments applied together are multiplied, cell by cell (Highway Safety Manual, Part D default; it assumes independent effects and may overstate combined benefit)";
+
+/**
+ * Combined CMF of several treatments on one crash cell by the multiplicative rule
+ * (Highway Safety Manual 2010, Part D introduction: CMF_combined = CMF_1 × CMF_2 × …).
+ */
+export function combineCmfs(treatments: readonly Treatment[], type: CrashType, severity: Severity): number {
+  let combined = 1;
+  for (const treatment of treatments) combined *= treatmentCmf(treatment, type, severity);
+  return combined;
+}

@@ -41,7 +41,14 @@ export interface Programme {
   readonly constraints: readonly SideConstraint[];
 }
 
-export type SolveStatus = "optimal" | "infeasible" | "time-limit";
+/**
+ * - `optimal`: proven best (within `relativeGap`, or floating-point tolerance when it is 0); `choice` verified.
+ * - `time-limit`: stopped early; `choice` is the best verified feasible programme found, `bound` still holds.
+ * - `infeasible`: no programme meets the budget, the must-fund sites and every rule; see `diagnosis`.
+ * - `not-solved`: no trustworthy answer (model too large for the engine, engine failure, or an answer
+ *   that failed verification); `choice` is all null and `diagnosis` says why.
+ */
+export type SolveStatus = "optimal" | "infeasible" | "time-limit" | "not-solved";
 
 export type EngineName = "auto" | "exact" | "lp-solver" | "highs";
 
@@ -74,5 +81,19 @@ export interface Solution {
   readonly budgetMarginalValue: number;
   readonly engine: Exclude<EngineName, "auto">;
   /** Why the model is infeasible, in plain words, when it is. */
+  readonly diagnosis?: string;
+}
+
+/**
+ * What one engine hands to the facade before verification: the facade recomputes objective and
+ * cost with `checkSolution` and never trusts an engine's own arithmetic.
+ */
+export interface EngineResult {
+  readonly status: SolveStatus;
+  /** Chosen option per group (all null unless status is `optimal` or `time-limit`). */
+  readonly choice: readonly (number | null)[];
+  /** Proven upper bound on the optimum; NaN when the engine proves none. */
+  readonly bound: number;
+  readonly budgetMarginalValue: number;
   readonly diagnosis?: string;
 }

@@ -1,4 +1,4 @@
-import { dirname, resolve } from "node:path";
+import { dirname, relative, resolve } from "node:path";
 import { completeCrashMatrix } from "../model/crashMatrix.js";
 import type {
   BaselineMethod,
@@ -86,7 +86,8 @@ export function loadScenario(file: string): LoadedScenario {
 
   const catalogues = raw.catalogues.map((path, index) => {
     try {
-      return loadCatalogue(resolve(dirname(file), path), path);
+      const resolved = resolve(dirname(file), path);
+      return loadCatalogue(resolved, relative(process.cwd(), resolved) || resolved);
     } catch (error) {
       if (error instanceof InputError && error.code === "missing-file") {
         throw new InputError([

@@ -1,0 +1,27 @@
+import { planProgramme, type PlanResult } from "./planProgramme.js";
+import type { PreparedPlan } from "./preparePlan.js";
+import type { SolveOptions } from "../solver/types.js";
+
+/** The optimal list at one budget level of a frontier. */
+export interface FrontierLevel {
+  readonly budget: number;
+  readonly plan: PlanResult;
+}
+
+/** Evenly spaced budget levels from `from` to `to` inclusive (`steps` intervals, so steps + 1 levels). */
+export function budgetLevels(from: number, to: number, steps: number): number[] {
+  if (!(steps >= 1) || !Number.isInteger(steps)) throw new RangeError(`steps must be a whole number >= 1, got ${steps}`);
+  if (!(to >= from)) throw new RangeError(`budget range must rise: from ${from} to ${to}`);
+  return Array.from({ length: steps + 1 }, (_, index) => (index === steps ? to : from + ((to - from) * index) / steps));
+}
+
+/** Solves the prepared scenario to optimality at each budget level, in the order given. */
+export async function budgetFrontier(
+  prepared: PreparedPlan,
+  levels: readonly number[],
+  solveOptions: Partial<SolveOptions> = {},
+): Promise<FrontierLevel[]> {
+  const frontier: FrontierLevel[] = [];
+  for (const budget of levels) frontier.push({ budget, plan: await planProgramme(prepared, budget, solveOptions) });
+  return frontier;
+}

@@ -10,18 +10,19 @@ import type { Programme, SideConstraint } from "./types.js";
 export function diagnoseInfeasibility(programme: Programme): string | undefined {
   const { groups, budget } = programme;
   let requiredCost = 0;
-  let requiredCount = 0;
+  const required: string[] = [];
   for (const group of groups) {
     if (!group.required) continue;
     if (group.options.length === 0) {
       return `Site ${group.id} must be funded but has no alternatives; give it at least one or drop the requirement.`;
     }
-    requiredCount += 1;
-    requiredCost += Math.min(...group.options.map((o) => o.cost));
+    const cheapest = Math.min(...group.options.map((o) => o.cost));
+    required.push(`${group.id} (${formatAmount(cheapest)})`);
+    requiredCost += cheapest;
   }
   if (requiredCost > budget) {
     return (
-      `The ${requiredCount} must-fund sites' cheapest alternatives cost ${formatAmount(requiredCost)} together, ` +
+      `The must-fund sites' cheapest alternatives, ${required.join(", ")}, cost ${formatAmount(requiredCost)} together, ` +
       `${formatAmount(requiredCost - budget)} more than the budget of ${formatAmount(budget)}; ` +
       `raise the budget or drop some must-fund sites.`
     );

@@ -40,7 +40,8 @@ export function registerPlanCommand(program: Command, io: CliIo): void {
       const engine = parseChoiceOption("--engine", options.engine, ENGINES);
       const objective = options.objective === undefined ? undefined : parseChoiceOption<Objective>("--objective", options.objective, ["ksi", "benefit"]);
       const budget = options.budget === undefined ? undefined : parseAmountOption("--budget", options.budget);
-      const { scenario } = loadScenario(file);
+      const { scenario, warnings } = loadScenario(file);
+      if (warnings.length > 0) io.stderr(`note: ${warnings.length} warning(s) about the input; 'averta check ${file}' lists them\n`);
       const result = await planProgramme(preparePlan(scenario, objective), budget ?? scenario.budget, { engine });
       const content =
         format === "json" ? JSON.stringify(planJson(result), null, 2) + "\n" : format === "csv" ? planCsv(result) : planTable(result);

@@ -41,7 +41,8 @@ export function uncertaintyTable(result: UncertaintyResult, sensitivity: Sensiti
     wordWrap: true,
     colWidths: [null, 44],
   } as ConstructorParameters<typeof Table>[0]);
-  for (const s of summary.selections) {
+  const shown = summary.selections.filter((s) => s.inPlan || s.class !== "rare");
+  for (const s of shown) {
     selections.push([s.site, s.treatments.join(" + "), `${formatFixed(100 * s.probability, 1)}%`, s.inPlan ? "yes" : "", s.class]);
   }
 
@@ -69,6 +70,7 @@ export function uncertaintyTable(result: UncertaintyResult, sensitivity: Sensiti
     "",
     `Selection probability (core: in ≥ ${CORE_PROBABILITY * 100}% of draws' best lists; marginal: ≥ ${MARGINAL_PROBABILITY * 100}%; rare: below)`,
     selections.toString(),
+    ...(shown.length < summary.selections.length ? [`${summary.selections.length - shown.length} other site-alternative(s) were best in under ${MARGINAL_PROBABILITY * 100}% of draws (listed in --format json).`] : []),
     "",
     `One at a time: change in the chosen list's KSI avoided (base ${formatFixed(sensitivity.baseKsiAvoided, 2)}) and B/C (base ${formatFixed(sensitivity.baseBcRatio, 2)}); "list changes" when re-optimising picks another list`,
     tornado.toString(),

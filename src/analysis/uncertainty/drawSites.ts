@@ -1,3 +1,4 @@
+import { cellCmfTable } from "../../model/cellCmfTable.js";
 import { evaluateAlternative } from "../../model/evaluateAlternative.js";
 import { drawRandomSource } from "../../model/random/drawRandomSource.js";
 import { sampleSiteBaseline } from "../../model/sampleSiteBaseline.js";
@@ -16,7 +17,9 @@ import type { DrawSettings } from "./drawSettings.js";
 export function drawSites(prepared: PreparedPlan, drawIndex: number, settings: DrawSettings): SiteAlternatives[] {
   const { scenario } = prepared;
   const random = drawRandomSource(settings.seed, drawIndex);
-  const treatments = new Map(sampleTreatmentCmfs(scenario.catalogue.treatments, random).map((t) => [t.id, t]));
+  const sampled = sampleTreatmentCmfs(scenario.catalogue.treatments, random);
+  const treatments = new Map(sampled.map((t) => [t.id, t]));
+  const cellCmf = cellCmfTable(sampled);
   const years = windowYears(scenario);
   return prepared.sites.map((entry, index) => {
     if (entry.alternatives.length === 0) return entry;
@@ -24,7 +27,7 @@ export function drawSites(prepared: PreparedPlan, drawIndex: number, settings: D
     if (baseline.site !== entry.site.id) throw new RangeError(`baselines and sites are out of step at ${entry.site.id}`);
     const expected = settings.sampleBaselines ? sampleSiteBaseline(baseline, entry.site, years, random).expectedPerYear : baseline.expectedPerYear;
     const alternatives = entry.alternatives.map((alternative) =>
-      evaluateAlternative(entry.site, alternative.treatments.map((id) => treatments.get(id) as Treatment), expected, scenario.economics),
+      evaluateAlternative(entry.site, alternative.treatments.map((id) => treatments.get(id) as Treatment), expected, scenario.economics, cellCmf),
     );
     return { ...entry, alternatives };
   });

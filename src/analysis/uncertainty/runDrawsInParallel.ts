@@ -57,17 +57,24 @@ export async function runDrawsInParallel(
     return outcomes;
   }
   const script = workerScript();
-  await Promise.all(
-    shares.map(
-      (drawIndices) =>
-        new Promise<void>((resolve, reject) => {
-          const job: DrawJob = { scenario: prepared.scenario, objective: prepared.objective, planChoice, drawIndices, settings };
-          const worker = new Worker(script, { workerData: job });
-          worker.on("message", (outcome: DrawOutcome) => record(outcome));
-          worker.on("error", reject);
-          worker.on("exit", (code) => (code === 0 ? resolve() : reject(new Error(`a draw worker stopped with exit code ${code}`))));
-        }),
-    ),
+  const workers = shares.map(
+    (drawIndices) => new Worker(script, { workerData: { scenario: prepared.scenario, objective: prepared.objective, planChoice, drawIndices, settings } satisfies DrawJob }),
   );
+  try {
+    await Promise.all(
+      workers.map(
+        (worker) =>
+          new Promise<void>((resolve, reject) => {
+            worker.on("message", (outcome: DrawOutcome) => record(outcome));
+            worker.on("error", reject);
+            worker.on("exit", (code) => (code === 0 ? resolve() : reject(new Error(`a draw worker stopped with exit code ${code}`))));
+          }),
+      ),
+    );
+  } catch (error) {
+    // One failed worker fails the run; the others would only waste time.
+    await Promise.all(workers.map((worker) => worker.terminate()));
+    throw error;
+  }
   return outcomes;
 }

@@ -1,4 +1,5 @@
-import { combineCmfs } from "./combineCmfs.js";
+import { combineCmfs, type CellCmf } from "./combineCmfs.js";
+import { treatmentCmf } from "./treatmentCmf.js";
 import { treatmentCapitalCost } from "./treatmentCapitalCost.js";
 import { uniformSeriesPresentWorth } from "./uniformSeriesPresentWorth.js";
 import { CRASH_TYPES, KSI_SEVERITIES, SEVERITIES, type Alternative, type CrashMatrix, type Economics, type Severity, type Site, type Treatment } from "./types.js";
@@ -16,12 +17,14 @@ export const SERVICE_LIFE_RULE =
  * = the K and A cells summed over those years. Benefit PV discounts each year's avoided crash
  * costs with the uniform-series present-worth factor over the span the active set is constant.
  * Lifecycle cost = capital + Σ upkeep × (P/A, i, min(life, horizon)).
+ * `cellCmf` may replace treatmentCmf with a faster lookup of the same values (uncertainty draws).
  */
 export function evaluateAlternative(
   site: Site,
   treatments: readonly Treatment[],
   expectedPerYear: CrashMatrix,
   economics: Economics,
+  cellCmf: CellCmf = treatmentCmf,
 ): Alternative {
   const { discountRate, horizonYears, crashCosts } = economics;
   const cost = treatments.reduce((total, treatment) => total + treatmentCapitalCost(treatment, site), 0);
@@ -40,7 +43,9 @@ export function evaluateAlternative(
     const avoided = { K: 0, A: 0, B: 0, C: 0, O: 0 };
     for (const type of CRASH_TYPES) {
       for (const severity of SEVERITIES) {
-        avoided[severity] += expectedPerYear[type][severity] * (1 - combineCmfs(active, type, severity));
+        const expected = expectedPerYear[type][severity];
+        // Empty cells avoid nothing; skipping them is most of the work saved on sparse crash matrices.
+        if (expected !== 0) avoided[severity] += expected * (1 - combineCmfs(active, type, severity, cellCmf));
       }
     }
     firstYear ??= avoided;

@@ -1,0 +1,87 @@
+import { availableParallelism } from "node:os";
+import type { Command } from "commander";
+import { preparePlan } from "../../analysis/preparePlan.js";
+import { analyseUncertainty } from "../../analysis/uncertainty/analyseUncertainty.js";
+import { oneAtATimeSensitivity } from "../../analysis/uncertainty/oneAtATimeSensitivity.js";
+import { InputError } from "../../io/InputError.js";
+import { refuseExistingOutput } from "../../io/refuseExistingOutput.js";
+import { loadScenario } from "../../io/loadScenario.js";
+import { writeOutputFile } from "../../io/writeOutputFile.js";
+import { progressBar } from "../../report/progressBar.js";
+import { tornadoSvg } from "../../report/tornadoSvg.js";
+import { uncertaintyJson } from "../../report/uncertaintyJson.js";
+import { uncertaintyTable } from "../../report/uncertaintyTable.js";
+import type { CliIo } from "../CliIo.js";
+import { emitOutput } from "../emitOutput.js";
+import { parseAmountOption, parseChoiceOption, parseIntegerOption } from "../parseOptionValues.js";
+import { ENGINES } from "./planCommand.js";
+
+/** Draws and seed used when none are given: same seed, same output, on any machine. */
+export const DEFAULT_DRAWS = 1000;
+export const DEFAULT_SEED = 2027;
+const FORMATS = ["table", "json"] as const;
+
+interface UncertaintyCommandOptions {
+  draws: string;
+  seed: string;
+  threads?: string;
+  budget?: string;
+  format: string;
+  out?: string;
+  tornado?: string;
+  force?: boolean;
+  fixedBaseline?: boolean;
+  engine: string;
+}
+
+/** `averta uncertainty <scenario>`: how sure the chosen list is, under CMF and baseline uncertainty. */
+export function registerUncertaintyCommand(program: Command, io: CliIo): void {
+  program
+    .command("uncertainty")
+    .description("draw CMFs and baselines from their uncertainty: spread of the list's results, selection probabilities, regret, one-at-a-time sensitivity")
+    .argument("<scenario>", "scenario YAML file")
+    .option("-n, --draws <count>", "Monte Carlo draws", String(DEFAULT_DRAWS))
+    .option("-s, --seed <seed>", "random seed, a whole number from 0 to 4294967295", String(DEFAULT_SEED))
+    .option("-t, --threads <count>", "threads to spread the draws over (the result does not depend on it)")
+    .option("-b, --budget <amount>", "budget to use instead of the scenario's (4500000, 4.5M, 750k)")
+    .option("--fixed-baseline", "hold site baselines at their point estimates; draw CMFs only")
+    .option("-f, --format <format>", "table or json", "table")
+    .option("-o, --out <file>", "write to this file instead of standard output")
+    .option("--tornado <file.svg>", "also write the one-at-a-time sensitivity as a tornado chart (SVG)")
+    .option("--force", "replace --out and --tornado files that already exist")
+    .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
+    .action(async (file: string, options: UncertaintyCommandOptions) => {
+      const format = parseChoiceOption("--format", options.format, FORMATS);
+      const engine = parseChoiceOption("--engine", options.engine, ENGINES);
+      const draws = parseIntegerOption("--draws", options.draws, 1, 1_000_000);
+      const seed = parseIntegerOption("--seed", options.seed, 0, 0xffffffff);
+      const threads = options.threads === undefined ? Math.min(availableParallelism(), 64) : parseIntegerOption("--threads", options.threads, 1, 64);
+      const budget = options.budget === undefined ? undefined : parseAmountOption("--budget", options.budget);
+      const force = options.force === true;
+      if (options.tornado !== undefined && !options.tornado.toLowerCase().endsWith(".svg")) {
+        throw new InputError([{ code: "bad-option", file: "--tornado", message: `'${options.tornado}' is not an .svg file name`, hint: "give a file name ending in .svg" }]);
+      }
+      refuseExistingOutput("--out", options.out, force);
+      refuseExistingOutput("--tornado", options.tornado, force);
+      const { scenario } = loadScenario(file);
+      const prepared = preparePlan(scenario);
+      const solveOptions = { engine };
+      const result = await analyseUncertainty(prepared, {
+        draws,
+        seed,
+        threads,
+        sampleBaselines: options.fixedBaseline !== true,
+        budget: budget ?? scenario.budget,
+        solveOptions,
+        ...(io.stderrIsTty && { onProgress: (done: number, total: number) => io.stderr(progressBar(done, total)) }),
+      });
+      if (io.stderrIsTty) io.stderr("\n");
+      const sensitivity = await oneAtATimeSensitivity(result.plan, solveOptions);
+      const content = format === "json" ? JSON.stringify(uncertaintyJson(result, sensitivity), null, 2) + "\n" : uncertaintyTable(result, sensitivity);
+      if (options.tornado !== undefined) {
+        writeOutputFile(options.tornado, tornadoSvg(sensitivity, `${scenario.name}: one-at-a-time sensitivity`), force);
+        io.stderr(`wrote ${options.tornado}\n`);
+      }
+      emitOutput(io, content, options.out, force);
+    });
+}

@@ -1,0 +1,86 @@
+import Table from "cli-table3";
+import type { UncertaintyResult } from "../analysis/uncertainty/analyseUncertainty.js";
+import type { SensitivityCase, SensitivityResult } from "../analysis/uncertainty/oneAtATimeSensitivity.js";
+import type { Spread } from "../analysis/uncertainty/summariseDraws.js";
+import { CORE_PROBABILITY, MARGINAL_PROBABILITY } from "../analysis/uncertainty/summariseDraws.js";
+import { BASELINE_SAMPLING_RULE } from "../model/sampleSiteBaseline.js";
+import { CAUTIONS } from "./cautions.js";
+import { formatFixed, formatMoney } from "./formatNumber.js";
+import { CMF_SAMPLING_RULE } from "./uncertaintyJson.js";
+
+const plainStyle = { head: [], border: [] };
+
+function signed(value: number, decimals: number): string {
+  return (value > 0 ? "+" : "") + formatFixed(value, decimals);
+}
+
+function caseText(value: SensitivityCase): string {
+  return `${value.label}: ${signed(value.ksiAvoidedChange, 2)} KSI, B/C ${signed(value.bcRatioChange, 2)}${value.listChanges ? ", list changes" : ""}`;
+}
+
+/** The uncertainty report for a terminal: spreads, P(B/C > 1), regret, selection probabilities and the tornado table. */
+export function uncertaintyTable(result: UncertaintyResult, sensitivity: SensitivityResult): string {
+  const { plan, summary } = result;
+  const { scenario } = plan.prepared;
+  const currency = scenario.currency;
+  const spreads = new Table({
+    head: ["Chosen list over the draws", "Point", "Mean", "P5", "P50", "P95"],
+    colAligns: ["left", "right", "right", "right", "right", "right"],
+    style: plainStyle,
+  } as ConstructorParameters<typeof Table>[0]);
+  const row = (label: string, point: number, value: Spread, format: (n: number) => string) =>
+    spreads.push([label, format(point), format(value.mean), format(value.p5), format(value.p50), format(value.p95)]);
+  row("KSI avoided", plan.totals.ksiAvoided, summary.planKsiAvoided, (n) => formatFixed(n, 2));
+  row(`Benefit PV (${currency})`, plan.totals.benefitPV, summary.planBenefitPV, formatMoney);
+  row("B/C", plan.totals.bcRatio, summary.planBcRatio, (n) => formatFixed(n, 2));
+
+  const selections = new Table({
+    head: ["Site", "Treatments", "Selected", "In plan", "Class"],
+    colAligns: ["left", "left", "right", "left", "left"],
+    style: plainStyle,
+    wordWrap: true,
+    colWidths: [null, 44],
+  } as ConstructorParameters<typeof Table>[0]);
+  const shown = summary.selections.filter((s) => s.inPlan || s.class !== "rare");
+  for (const s of shown) {
+    selections.push([s.site, s.treatments.join(" + "), `${formatFixed(100 * s.probability, 1)}%`, s.inPlan ? "yes" : "", s.class]);
+  }
+
+  const tornado = new Table({
+    head: ["Parameter (base)", "Low", "High"],
+    style: plainStyle,
+    wordWrap: true,
+    colWidths: [40, 40, 40],
+  } as ConstructorParameters<typeof Table>[0]);
+  for (const r of sensitivity.rows) tornado.push([`${r.parameter} (${r.base})`, caseText(r.low), caseText(r.high)]);
+
+  const unit = plan.prepared.objective === "ksi" ? "KSI" : currency;
+  const format = plan.prepared.objective === "ksi" ? (n: number) => formatFixed(n, 2) : formatMoney;
+  const lines = [
+    `${scenario.name}: how sure is the list?`,
+    `${result.draws} draws, seed ${result.seed}; budget ${formatMoney(plan.budget)} ${currency}; plan status ${plan.solution.status}; ${plan.totals.projects} project(s)`,
+    `CMFs: ${result.effectsWithStandardError} effect(s) drawn; ${result.effectsWithoutStandardError} effect(s) have no standard error and are held at their CMF.`,
+    `Baselines: ${result.sampleBaselines ? "drawn" : "held fixed (--fixed-baseline)"}${result.sitesWithFixedBaseline > 0 && result.sampleBaselines ? `; ${result.sitesWithFixedBaseline} site(s) held fixed (method without a posterior)` : ""}.`,
+    "",
+    spreads.toString(),
+    `Probability the list's B/C exceeds 1: ${formatFixed(100 * summary.probabilityBcAboveOne, 1)}%`,
+    `Regret (what the list loses against each draw's best list, ${unit}): mean ${format(summary.regret.mean)}, P95 ${format(summary.regret.p95)}`,
+    ...(summary.planInfeasibleDraws > 0 ? [`The list breaks a rule in ${summary.planInfeasibleDraws} draw(s) (a KSI-share floor moved).`] : []),
+    ...(summary.solvedDraws < summary.draws ? [`${summary.draws - summary.solvedDraws} draw(s) had no solved list: ${JSON.stringify(summary.statusCounts)}`] : []),
+    "",
+    `Selection probability (core: in ≥ ${CORE_PROBABILITY * 100}% of draws' best lists; marginal: ≥ ${MARGINAL_PROBABILITY * 100}%; rare: below)`,
+    selections.toString(),
+    ...(shown.length < summary.selections.length ? [`${summary.selections.length - shown.length} other site-alternative(s) were best in under ${MARGINAL_PROBABILITY * 100}% of draws (listed in --format json).`] : []),
+    "",
+    `One at a time: change in the chosen list's KSI avoided (base ${formatFixed(sensitivity.baseKsiAvoided, 2)}) and B/C (base ${formatFixed(sensitivity.baseBcRatio, 2)}); "list changes" when re-optimising picks another list`,
+    tornado.toString(),
+    "",
+    "Method:",
+    `- ${CMF_SAMPLING_RULE}`,
+    `- ${result.sampleBaselines ? BASELINE_SAMPLING_RULE : "baselines held at their point estimates"}`,
+    "",
+    "Cautions:",
+    ...CAUTIONS.map((caution) => `- ${caution}`),
+  ];
+  return lines.join("\n") + "\n";
+}

@@ -33,8 +33,8 @@ export function budgetSection(input: ReportInput): string {
 <input type="range" id="budget-slider" min="0" max="${Math.max(0, frontier.length - 1)}" step="1" value="${data.chosen}">
 <output id="slider-budget" for="budget-slider"></output>
 <dl class="slider-totals">${total("projects", "Projects")}${total("cost", `Spend (${currency})`)}${total("ksi", "KSI avoided")}${total("ksi-per-year", "KSI a year at first")}${total("benefit", `Benefit PV (${currency})`)}${total("bc", "B/C")}${total("npv", `NPV (${currency})`)}${total("cost-per-ksi", `Cost per KSI (${currency})`)}</dl>
-<p id="slider-status" class="note"></p>
-<table class="list compact"><thead><tr><th>Site</th><th>District</th><th>Treatments</th><th class="num">Cost</th><th class="num">KSI avoided</th></tr></thead><tbody id="slider-funded"></tbody></table>
+<p class="note"><span id="slider-status"></span> <span id="slider-change"></span></p>
+<div class="slider-list"><table class="list compact"><thead><tr><th>Site</th><th>District</th><th>Treatments</th><th class="num">Cost</th><th class="num">KSI avoided</th><th>vs chosen</th></tr></thead><tbody id="slider-funded"></tbody></table></div>
 </div>
 <table class="list compact levels">
 <caption>Optimal list at each budget level (money in ${currency})</caption>

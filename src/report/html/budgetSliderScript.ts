@@ -1,7 +1,7 @@
 /**
  * The report's only script: reads the embedded frontier JSON (#frontier-data) and, as the
  * #budget-slider moves, shows that level's totals and funded projects and moves the chart's
- * ring. It writes text with textContent only, so scenario text is never parsed as HTML.
+ * ring, marking the sites added compared with the chosen budget. It writes text with textContent only, so scenario text is never parsed as HTML.
  * Numbers are formatted as formatMoney / formatFixed format them (en-US grouping).
  */
 export const BUDGET_SLIDER_SCRIPT = `(function () {
@@ -9,6 +9,7 @@ export const BUDGET_SLIDER_SCRIPT = `(function () {
   var data = JSON.parse(document.getElementById("frontier-data").textContent);
   var slider = document.getElementById("budget-slider");
   var ring = document.getElementById("frontier-current");
+  var chosenSites = data.levels[data.chosen].funded.map(function (project) { return project[0]; });
   function money(value) { return value === null ? "\\u2013" : Math.round(value).toLocaleString("en-US"); }
   function fixed(value, decimals) { return value === null ? "\\u2013" : value.toLocaleString("en-US", { minimumFractionDigits: decimals, maximumFractionDigits: decimals }); }
   function put(id, value, text) {
@@ -38,6 +39,11 @@ export const BUDGET_SLIDER_SCRIPT = `(function () {
     document.getElementById("slider-status").textContent = totals
       ? (index === data.chosen ? "This is the chosen budget: the list matches the capital list above." : "")
       : "No list is possible at this budget: the must-fund rules alone cost more.";
+    var here = level.funded.map(function (project) { return project[0]; });
+    var dropped = chosenSites.filter(function (site) { return here.indexOf(site) < 0; }).map(function (site) { return data.sites[site].id; });
+    var added = here.filter(function (site) { return chosenSites.indexOf(site) < 0; }).length;
+    document.getElementById("slider-change").textContent = index === data.chosen || !totals ? "" :
+      "Compared with the chosen budget: " + added + " site" + (added === 1 ? "" : "s") + " added, " + dropped.length + " dropped" + (dropped.length > 0 ? " (" + dropped.join(", ") + ")" : "") + ".";
     var body = document.getElementById("slider-funded");
     while (body.firstChild) body.removeChild(body.firstChild);
     level.funded.forEach(function (project) {
@@ -49,6 +55,8 @@ export const BUDGET_SLIDER_SCRIPT = `(function () {
       cell(row, project[1], false);
       cell(row, money(project[2]), true);
       cell(row, fixed(project[3], 2), true);
+      cell(row, chosenSites.indexOf(project[0]) < 0 ? "added" : "", false);
+      row.lastChild.className = "change";
       body.appendChild(row);
     });
     var point = document.querySelector('circle.level[data-level="' + index + '"]');

@@ -1,6 +1,6 @@
 import type { PlanResult } from "../../analysis/planProgramme.js";
 import type { PolicyRule, Severity } from "../../model/types.js";
-import { SEVERITIES } from "../../model/types.js";
+import { CRASH_TYPES, SEVERITIES } from "../../model/types.js";
 import { describeAssumptions } from "../describeAssumptions.js";
 import { formatFixed, formatMoney } from "../formatNumber.js";
 import { escapeHtml } from "./escapeHtml.js";
@@ -36,7 +36,7 @@ export function assumptionsSection(plan: PlanResult): string {
         `<li><strong>${escapeHtml(treatment.name)}</strong> (service life ${treatment.serviceLifeYears} years)<ul>${treatment.effects
           .map(
             (effect) =>
-              `<li>CMF ${formatFixed(effect.cmf, 2)}${effect.standardError === undefined ? "" : ` (standard error ${formatFixed(effect.standardError, 2)})`} on ${escapeHtml(effect.crashTypes.join(", "))} crashes, severities ${escapeHtml(effect.severities.join(""))}: ${escapeHtml(effect.source)}</li>`,
+              `<li>CMF ${formatFixed(effect.cmf, 2)}${effect.standardError === undefined ? "" : ` (standard error ${formatFixed(effect.standardError, 2)})`} on ${effect.crashTypes.length === CRASH_TYPES.length ? "all crash types" : `${escapeHtml(effect.crashTypes.join(", "))} crashes`}, ${effect.severities.length === SEVERITIES.length ? "all severities" : `severities ${escapeHtml(effect.severities.join(""))}`}: ${escapeHtml(effect.source)}</li>`,
           )
           .join("")}</ul></li>`,
     )

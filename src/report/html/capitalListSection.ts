@@ -17,7 +17,7 @@ export function capitalListSection(input: ReportInput): string {
       robustness === undefined ? "" : `<td class="num">${probability === undefined ? "–" : `${formatFixed(100 * probability, 0)}%`}</td>`;
     const reason = input.reasons?.get(entry.site.id) ?? projectReason(project);
     return `<tbody class="project" data-site="${escapeHtml(entry.site.id)}">
-<tr><td><span class="site-id">${escapeHtml(entry.site.id)}</span> ${escapeHtml(entry.site.name)}${entry.required ? ' <span class="tag">must fund</span>' : ""}</td><td>${escapeHtml(treatmentNames(scenario, alternative.treatments))}</td><td>${escapeHtml(entry.site.district)}</td><td class="num">${formatMoney(alternative.cost)}</td><td class="num">${formatFixed(alternative.ksiAvoided, 2)}</td><td class="num">${formatFixed(alternative.bcRatio, 1)}</td><td class="num">${formatMoney(alternative.npv)}</td><td class="num">${formatMoney(alternative.costPerKsi)}</td>${robustnessCell}</tr>
+<tr><td><span class="site-id">${escapeHtml(entry.site.id)}</span> ${escapeHtml(entry.site.name)}${entry.required ? ' <span class="tag">must fund</span>' : ""}</td><td class="treatments">${escapeHtml(treatmentNames(scenario, alternative.treatments))}</td><td>${escapeHtml(entry.site.district)}</td><td class="num">${formatMoney(alternative.cost)}</td><td class="num">${formatFixed(alternative.ksiAvoided, 2)}</td><td class="num">${formatFixed(alternative.bcRatio, 1)}</td><td class="num">${formatMoney(alternative.npv)}</td><td class="num">${formatMoney(alternative.costPerKsi)}</td>${robustnessCell}</tr>
 <tr class="reason"><td colspan="${columns}">${escapeHtml(reason)}</td></tr>
 </tbody>`;
   });

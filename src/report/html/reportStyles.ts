@@ -34,6 +34,7 @@ table.levels tbody tr:nth-child(even), table.costs tr:nth-child(even) { backgrou
 table.costs { max-width: 460px; }
 tr.chosen-row td { font-weight: 650; }
 caption { text-align: left; padding-bottom: 4px; }
+td.treatments { width: 30%; }
 .site-id { font-weight: 650; font-variant-numeric: tabular-nums; }
 .tag { font-size: 11px; border: 1px solid var(--ink); padding: 0 4px; border-radius: 3px; white-space: nowrap; }
 figure { margin: 8px 0; }
@@ -68,6 +69,11 @@ a { color: var(--accent); }
   body { font-size: 10pt; }
   main { max-width: none; padding: 0; }
   .screen-only { display: none !important; }
+  h2 { font-size: 14pt; }
+  table.list, table.compact { font-size: 8.5pt; }
+  table.list th { font-size: 7.5pt; }
+  table.list tr.reason td { font-size: 8pt; }
+  .figure-value { font-size: 15pt; }
   h2 { break-after: avoid; page-break-after: avoid; }
   figure, .figures, .cautions, tbody.project, tr { break-inside: avoid; page-break-inside: avoid; }
   thead { display: table-header-group; }

@@ -4,6 +4,7 @@ import type { CliIo } from "./CliIo.js";
 import { registerCheckCommand } from "./commands/checkCommand.js";
 import { registerPlanCommand } from "./commands/planCommand.js";
 import { registerUncertaintyCommand } from "./commands/uncertaintyCommand.js";
+import { registerReportCommand } from "./commands/reportCommand.js";
 
 /** Exit codes: 0 success, 1 internal fault, 2 bad input or usage. */
 export const EXIT_OK = 0;
@@ -21,6 +22,7 @@ export function createProgram(io: CliIo): Command {
   registerCheckCommand(program, io);
   registerPlanCommand(program, io);
   registerUncertaintyCommand(program, io);
+  registerReportCommand(program, io);
   for (const command of program.commands) command.exitOverride().configureOutput({ writeOut: io.stdout, writeErr: io.stderr });
   return program;
 }

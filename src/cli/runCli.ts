@@ -2,6 +2,7 @@ import { Command, CommanderError } from "commander";
 import { InputError, formatProblem } from "../io/InputError.js";
 import type { CliIo } from "./CliIo.js";
 import { registerCheckCommand } from "./commands/checkCommand.js";
+import { registerFrontierCommand } from "./commands/frontierCommand.js";
 import { registerPlanCommand } from "./commands/planCommand.js";
 
 /** Exit codes: 0 success, 1 internal fault, 2 bad input or usage. */
@@ -19,6 +20,7 @@ export function createProgram(io: CliIo): Command {
     .exitOverride();
   registerCheckCommand(program, io);
   registerPlanCommand(program, io);
+  registerFrontierCommand(program, io);
   for (const command of program.commands) command.exitOverride().configureOutput({ writeOut: io.stdout, writeErr: io.stderr });
   return program;
 }

@@ -2,6 +2,7 @@ import { Command, CommanderError } from "commander";
 import { InputError, formatProblem } from "../io/InputError.js";
 import type { CliIo } from "./CliIo.js";
 import { registerCheckCommand } from "./commands/checkCommand.js";
+import { registerCompareCommand } from "./commands/compareCommand.js";
 import { registerFrontierCommand } from "./commands/frontierCommand.js";
 import { registerPlanCommand } from "./commands/planCommand.js";
 
@@ -21,6 +22,7 @@ export function createProgram(io: CliIo): Command {
   registerCheckCommand(program, io);
   registerPlanCommand(program, io);
   registerFrontierCommand(program, io);
+  registerCompareCommand(program, io);
   for (const command of program.commands) command.exitOverride().configureOutput({ writeOut: io.stdout, writeErr: io.stderr });
   return program;
 }

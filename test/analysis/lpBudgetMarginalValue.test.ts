@@ -1,8 +1,11 @@
-import highsLoader from "highs";
+import highsExport from "highs";
 import { describe, expect, it } from "vitest";
 import { lpBudgetMarginalValue } from "../../src/analysis/lpBudgetMarginalValue.js";
 import type { Programme } from "../../src/solver/types.js";
 import { seededRandom } from "./syntheticPlan.js";
+
+// The package's declarations describe its CommonJS build; under ESM the default export is the loader itself.
+const highsLoader = highsExport as unknown as () => Promise<{ solve(problem: string): { Status: string; Rows: { Dual: number }[] } }>;
 
 // The LP relaxation in CPLEX LP format, for HiGHS (an independent reference LP solver, used only in tests).
 function lpText(programme: Programme): string {
@@ -41,7 +44,7 @@ describe("lpBudgetMarginalValue", () => {
         continue;
       }
       expect(lambda).toBeDefined();
-      expect(lambda!).toBeCloseTo(Math.abs((solved.Rows[0] as { Dual: number }).Dual), 9);
+      expect(lambda!).toBeCloseTo(Math.abs(solved.Rows[0]!.Dual), 9);
       compared += 1;
     }
     expect(compared).toBeGreaterThanOrEqual(50);

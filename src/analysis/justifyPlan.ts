@@ -147,7 +147,7 @@ export function entryThreshold(alternatives: readonly Alternative[], objective: 
 }
 
 function budgetExplanation(threshold: EntryThreshold | null, objective: "ksi" | "benefit"): string {
-  if (threshold === null) return "the budget ran out (no threshold: λ is unknown for this programme)";
+  if (threshold === null) return "the budget, or a policy rule, left it out (no threshold: λ is unknown when rules bind through side constraints)";
   if (threshold.costCut <= 0) return "the budget ran out at the margin: past its LP threshold, but it does not fit the money left (an integer effect)";
   const what = objective === "ksi" ? "KSI crashes" : "benefit PV";
   return (

@@ -51,7 +51,7 @@ export function justificationTable(planCase: PlanCase): string {
     `Method: ${justification.method}`,
     "",
     "Upgrades by incremental B/C (Highway Safety Manual, Part B, Chapter 7)",
-    upgrades.length === 0 ? "No funded site had more than one alternative." : `${upgrades.length} funded site(s) had several alternatives; ${flagged.length} chosen upgrade(s) have incremental B/C below 1 over the next cheaper alternative (chosen for KSI, not money):`,
+    upgrades.length === 0 ? "No funded site had more than one alternative." : `${upgrades.length} funded site(s) had several alternatives; ${flagged.length} chosen upgrade(s) have incremental B/C below 1 over the next cheaper alternative (chosen for KSI, not money)${flagged.length > 0 ? ":" : "."}`,
     ...flagged.map(
       (check) =>
         `- ${check.site} ${check.name}: ${check.chosen.join(" + ")} over ${check.stepFrom?.join(" + ") ?? "nothing"}, incremental B/C ${formatFixed(check.incrementalBcRatio ?? Number.NaN, 2)}` +
@@ -64,5 +64,6 @@ export function justificationTable(planCase: PlanCase): string {
       (ranking.rankingMeetsRules ? "" : " The ranking's list breaks at least one policy rule."),
     `Ranking used: ${ranking.definition}`,
   ];
-  return lines.join("\n") + "\n";
+  // No trailing newline: planTable separates sections itself.
+  return lines.join("\n");
 }

@@ -1,18 +1,11 @@
 import type { CliIo } from "../../src/cli/CliIo.js";
+import { runCli } from "../../src/cli/runCli.js";
 
-/** A CliIo that records what a command prints, for in-process CLI tests. */
-export function captureIo(): CliIo & { out: () => string; err: () => string } {
-  let out = "";
-  let err = "";
-  return {
-    stdout: (text) => {
-      out += text;
-    },
-    stderr: (text) => {
-      err += text;
-    },
-    stderrIsTty: false,
-    out: () => out,
-    err: () => err,
-  };
+/** Runs the CLI in-process and captures what it prints. */
+export async function runCaptured(argv: readonly string[]): Promise<{ code: number; stdout: string; stderr: string }> {
+  let stdout = "";
+  let stderr = "";
+  const io: CliIo = { stdout: (text) => void (stdout += text), stderr: (text) => void (stderr += text), stderrIsTty: false };
+  const code = await runCli(argv, io);
+  return { code, stdout, stderr };
 }

@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { runCli } from "../../src/cli/runCli.js";
-import { captureIo } from "./captureIo.js";
+import { runCaptured } from "./captureIo.js";
 
 const DEMO = "scenarios/demo.yaml";
 
@@ -16,9 +15,9 @@ interface CompareJson {
 }
 
 async function runJson<T>(argv: string[]): Promise<T> {
-  const io = captureIo();
-  expect(await runCli(argv, io)).toBe(0);
-  return JSON.parse(io.out()) as T;
+  const io = await runCaptured(argv);
+  expect(io.code).toBe(0);
+  return JSON.parse(io.stdout) as T;
 }
 
 describe("averta compare (smoke, demo scenario)", () => {
@@ -43,18 +42,18 @@ describe("averta compare (smoke, demo scenario)", () => {
   });
 
   it("compares two scenarios at their own budgets, and prints a table", async () => {
-    const io = captureIo();
-    expect(await runCli(["compare", DEMO, "scenarios/demo-with-rules.yaml"], io)).toBe(0);
-    expect(io.out()).toContain("What-if: A = scenarios/demo.yaml");
-    expect(io.out()).toContain("KSI avoided");
+    const io = await runCaptured(["compare", DEMO, "scenarios/demo-with-rules.yaml"]);
+    expect(io.code).toBe(0);
+    expect(io.stdout).toContain("What-if: A = scenarios/demo.yaml");
+    expect(io.stdout).toContain("KSI avoided");
   });
 
   it("needs exactly two budgets with one scenario (exit 2), and reports a bad budget", async () => {
-    const one = captureIo();
-    expect(await runCli(["compare", DEMO, "--budget", "5M"], one)).toBe(2);
-    expect(one.err()).toContain("--budget");
-    const bad = captureIo();
-    expect(await runCli(["compare", DEMO, "--budget", "5M", "--budget", "lots"], bad)).toBe(2);
-    expect(bad.err()).toContain("'lots'");
+    const one = await runCaptured(["compare", DEMO, "--budget", "5M"]);
+    expect(one.code).toBe(2);
+    expect(one.stderr).toContain("--budget");
+    const bad = await runCaptured(["compare", DEMO, "--budget", "5M", "--budget", "lots"]);
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toContain("'lots'");
   });
 });

@@ -2,8 +2,7 @@ import { existsSync, mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { runCli } from "../../src/cli/runCli.js";
-import { captureIo } from "./captureIo.js";
+import { runCaptured } from "./captureIo.js";
 
 const DEMO = "scenarios/demo.yaml";
 
@@ -11,10 +10,10 @@ describe("averta frontier (smoke, demo scenario)", () => {
   it("prints JSON levels whose KSI avoided never falls, and writes an SVG chart", async () => {
     const folder = mkdtempSync(join(tmpdir(), "averta-frontier-"));
     const chart = join(folder, "frontier.svg");
-    const io = captureIo();
-    const code = await runCli(["frontier", DEMO, "--from", "1M", "--to", "9.7M", "--steps", "3", "--format", "json", "--chart", chart], io);
+    const io = await runCaptured(["frontier", DEMO, "--from", "1M", "--to", "9.7M", "--steps", "3", "--format", "json", "--chart", chart]);
+    const code = io.code;
     expect(code).toBe(0);
-    const json = JSON.parse(io.out()) as { levels: { budget: number; ksiAvoided: number; spend: number; status: string }[]; scenarioBudget: number };
+    const json = JSON.parse(io.stdout) as { levels: { budget: number; ksiAvoided: number; spend: number; status: string }[]; scenarioBudget: number };
     expect(json.levels.map((level) => level.budget)).toEqual([1e6, 3.9e6, 6.8e6, 9.7e6]);
     for (let i = 0; i < json.levels.length; i += 1) {
       expect(json.levels[i]!.status).toBe("optimal");
@@ -30,8 +29,8 @@ describe("averta frontier (smoke, demo scenario)", () => {
     const chart = join(folder, "frontier.svg");
     const out = join(folder, "frontier.csv");
     writeFileSync(chart, "mine");
-    const io = captureIo();
-    const code = await runCli(["frontier", DEMO, "--steps", "1", "--out", out, "--chart", chart], io);
+    const io = await runCaptured(["frontier", DEMO, "--steps", "1", "--out", out, "--chart", chart]);
+    const code = io.code;
     expect(code).toBe(2);
     expect(readFileSync(chart, "utf8")).toBe("mine");
     expect(existsSync(out)).toBe(false);
@@ -41,16 +40,16 @@ describe("averta frontier (smoke, demo scenario)", () => {
     const folder = mkdtempSync(join(tmpdir(), "averta-frontier-"));
     const bad = join(folder, "bad.yaml");
     writeFileSync(bad, readFileSync(DEMO, "utf8").replace(/^budget: 9\.7M$/m, "budget: lots"));
-    const io = captureIo();
-    const code = await runCli(["frontier", bad], io);
+    const io = await runCaptured(["frontier", bad]);
+    const code = io.code;
     expect(code).toBe(2);
-    expect(io.err()).toContain(`${bad}:16:`);
-    expect(io.err()).not.toContain("    at ");
+    expect(io.stderr).toContain(`${bad}:16:`);
+    expect(io.stderr).not.toContain("    at ");
   });
 
   it("rejects --to below --from with exit 2", async () => {
-    const io = captureIo();
-    expect(await runCli(["frontier", DEMO, "--from", "5M", "--to", "1M"], io)).toBe(2);
-    expect(io.err()).toContain("--to");
+    const io = await runCaptured(["frontier", DEMO, "--from", "5M", "--to", "1M"]);
+    expect(io.code).toBe(2);
+    expect(io.stderr).toContain("--to");
   });
 });

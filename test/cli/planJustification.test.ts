@@ -1,12 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { runCli } from "../../src/cli/runCli.js";
-import { captureIo } from "./captureIo.js";
+import { runCaptured } from "./captureIo.js";
 
 describe("averta plan justification (smoke, demo scenario)", () => {
   it("adds a justification key to the JSON and keeps the existing contract keys", async () => {
-    const io = captureIo();
-    expect(await runCli(["plan", "scenarios/demo.yaml", "--format", "json"], io)).toBe(0);
-    const json = JSON.parse(io.out()) as Record<string, unknown> & {
+    const io = await runCaptured(["plan", "scenarios/demo.yaml", "--format", "json"]);
+    expect(io.code).toBe(0);
+    const json = JSON.parse(io.stdout) as Record<string, unknown> & {
       selected: { site: string }[];
       justification: {
         funded: { site: string; bcRank: number }[];
@@ -30,10 +29,10 @@ describe("averta plan justification (smoke, demo scenario)", () => {
   });
 
   it("prints the justification sections in the table", async () => {
-    const io = captureIo();
-    expect(await runCli(["plan", "scenarios/demo.yaml"], io)).toBe(0);
+    const io = await runCaptured(["plan", "scenarios/demo.yaml"]);
+    expect(io.code).toBe(0);
     for (const heading of ["Why these projects", "Why not the others", "Upgrades by incremental B/C", "Against a B/C ranking at the same budget", "Cautions:"]) {
-      expect(io.out()).toContain(heading);
+      expect(io.stdout).toContain(heading);
     }
   });
 });

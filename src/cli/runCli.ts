@@ -2,6 +2,8 @@ import { Command, CommanderError } from "commander";
 import { InputError, formatProblem } from "../io/InputError.js";
 import type { CliIo } from "./CliIo.js";
 import { registerCheckCommand } from "./commands/checkCommand.js";
+import { registerCompareCommand } from "./commands/compareCommand.js";
+import { registerFrontierCommand } from "./commands/frontierCommand.js";
 import { registerPlanCommand } from "./commands/planCommand.js";
 import { registerUncertaintyCommand } from "./commands/uncertaintyCommand.js";
 import { registerReportCommand } from "./commands/reportCommand.js";
@@ -23,6 +25,8 @@ export function createProgram(io: CliIo): Command {
   registerPlanCommand(program, io);
   registerUncertaintyCommand(program, io);
   registerReportCommand(program, io);
+  registerFrontierCommand(program, io);
+  registerCompareCommand(program, io);
   for (const command of program.commands) command.exitOverride().configureOutput({ writeOut: io.stdout, writeErr: io.stderr });
   return program;
 }

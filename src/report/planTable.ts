@@ -3,8 +3,8 @@ import type { PlanResult } from "../analysis/planProgramme.js";
 import { CAUTIONS } from "./cautions.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
 
-/** The funded list as a terminal table, with totals against the budget and the cautions. */
-export function planTable(result: PlanResult): string {
+/** The funded list as a terminal table, with totals against the budget, any extra sections (before the cautions) and the cautions. */
+export function planTable(result: PlanResult, sections: readonly string[] = []): string {
   const { prepared, solution, totals } = result;
   const currency = prepared.scenario.currency;
   const table = new Table({
@@ -47,6 +47,7 @@ export function planTable(result: PlanResult): string {
     result.funded.some((project) => project.entry.required) ? "* required by a must-fund rule" : "",
     `Optimality: upper bound ${formatFixed(solution.bound, 3)}, gap ${solution.gap.toExponential(1)} (engine: ${solution.engine}).`,
     "",
+    ...sections.flatMap((section) => [section, ""]),
     "Cautions:",
     ...CAUTIONS.map((caution) => `- ${caution}`),
   ];

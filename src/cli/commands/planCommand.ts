@@ -1,4 +1,5 @@
 import type { Command } from "commander";
+import { casePlan } from "../../analysis/casePlan.js";
 import { planProgramme } from "../../analysis/planProgramme.js";
 import { preparePlan } from "../../analysis/preparePlan.js";
 import { loadScenario } from "../../io/loadScenario.js";
@@ -6,6 +7,8 @@ import type { Objective } from "../../model/types.js";
 import { planCsv } from "../../report/planCsv.js";
 import { planJson } from "../../report/planJson.js";
 import { planTable } from "../../report/planTable.js";
+import { justificationJson } from "../../report/justificationJson.js";
+import { justificationTable } from "../../report/justificationTable.js";
 import type { EngineName } from "../../solver/types.js";
 import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
@@ -43,8 +46,13 @@ export function registerPlanCommand(program: Command, io: CliIo): void {
       const { scenario, warnings } = loadScenario(file);
       if (warnings.length > 0) io.stderr(`note: ${warnings.length} warning(s) about the input; 'averta check ${file}' lists them\n`);
       const result = await planProgramme(preparePlan(scenario, objective), budget ?? scenario.budget, { engine });
+      const planCase = format === "csv" ? undefined : casePlan(result);
       const content =
-        format === "json" ? JSON.stringify(planJson(result), null, 2) + "\n" : format === "csv" ? planCsv(result) : planTable(result);
+        format === "json"
+          ? JSON.stringify({ ...planJson(result), justification: justificationJson(planCase!) }, null, 2) + "\n"
+          : format === "csv"
+            ? planCsv(result)
+            : planTable(result, [justificationTable(planCase!)]);
       emitOutput(io, content, options.out, options.force === true);
     });
 }

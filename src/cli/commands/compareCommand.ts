@@ -1,0 +1,65 @@
+import type { Command } from "commander";
+import { comparePlans } from "../../analysis/comparePlans.js";
+import { planProgramme } from "../../analysis/planProgramme.js";
+import { preparePlan } from "../../analysis/preparePlan.js";
+import { InputError } from "../../io/InputError.js";
+import { loadScenario } from "../../io/loadScenario.js";
+import { compareJson } from "../../report/compareJson.js";
+import { compareTable, type CompareLabels } from "../../report/compareTable.js";
+import { formatMoney } from "../../report/formatNumber.js";
+import type { CliIo } from "../CliIo.js";
+import { emitOutput } from "../emitOutput.js";
+import { parseAmountOption, parseChoiceOption } from "../parseOptionValues.js";
+import { ENGINES } from "./planCommand.js";
+
+interface CompareOptions {
+  budget: string[];
+  format: string;
+  out?: string;
+  force?: boolean;
+  engine: string;
+}
+
+/** `averta compare <scenario> --budget A --budget B` or `averta compare <scenarioA> <scenarioB>`: what changes between two lists. */
+export function registerCompareCommand(program: Command, io: CliIo): void {
+  program
+    .command("compare")
+    .description("compare the optimal lists at two budgets, or of two scenarios: what enters, leaves or changes treatment")
+    .argument("<scenario>", "scenario YAML file (A)")
+    .argument("[other]", "second scenario YAML file (B); omit it and give --budget twice to compare two budgets")
+    .option("-b, --budget <amount>", "a budget; give it twice (A then B) with one scenario, or once to use for both scenarios", collect, [])
+    .option("-f, --format <format>", "table or json", "table")
+    .option("-o, --out <file>", "write to this file instead of standard output")
+    .option("--force", "replace --out if it already exists")
+    .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
+    .action(async (file: string, other: string | undefined, options: CompareOptions) => {
+      const format = parseChoiceOption("--format", options.format, ["table", "json"] as const);
+      const engine = parseChoiceOption("--engine", options.engine, ENGINES);
+      const budgets = options.budget.map((text) => parseAmountOption("--budget", text));
+      if (other === undefined && budgets.length !== 2) {
+        throw new InputError([{ code: "bad-option", file: "--budget", message: `compare with one scenario needs exactly two budgets, got ${budgets.length}`, hint: "write --budget 5M --budget 9.7M, or name a second scenario" }]);
+      }
+      if (other !== undefined && budgets.length > 1) {
+        throw new InputError([{ code: "bad-option", file: "--budget", message: `compare with two scenarios takes at most one budget, got ${budgets.length}`, hint: "drop --budget to use each scenario's own budget" }]);
+      }
+      const scenarioA = loadScenario(file).scenario;
+      const scenarioB = other === undefined ? scenarioA : loadScenario(other).scenario;
+      const preparedA = preparePlan(scenarioA);
+      const preparedB = other === undefined ? preparedA : preparePlan(scenarioB);
+      const budgetA = budgets[0] ?? scenarioA.budget;
+      const budgetB = other === undefined ? budgets[1]! : (budgets[0] ?? scenarioB.budget);
+      const planA = await planProgramme(preparedA, budgetA, { engine });
+      const planB = await planProgramme(preparedB, budgetB, { engine });
+      const labels: CompareLabels =
+        other === undefined
+          ? { a: `budget ${formatMoney(budgetA)}`, b: `budget ${formatMoney(budgetB)}`, currency: scenarioA.currency }
+          : { a: `${file} at ${formatMoney(budgetA)}`, b: `${other} at ${formatMoney(budgetB)}`, currency: scenarioA.currency };
+      const comparison = comparePlans(planA, planB);
+      const content = format === "json" ? JSON.stringify(compareJson(comparison, labels), null, 2) + "\n" : compareTable(comparison, labels);
+      emitOutput(io, content, options.out, options.force === true);
+    });
+}
+
+function collect(value: string, previous: string[]): string[] {
+  return [...previous, value];
+}

@@ -1,0 +1,73 @@
+import type { Command } from "commander";
+import { budgetFrontier, budgetLevels } from "../../analysis/budgetFrontier.js";
+import { fullFundingCost } from "../../analysis/fullFundingCost.js";
+import { preparePlan } from "../../analysis/preparePlan.js";
+import { summariseFrontier } from "../../analysis/summariseFrontier.js";
+import { assertOutputWritable } from "../../io/assertOutputWritable.js";
+import { InputError } from "../../io/InputError.js";
+import { loadScenario } from "../../io/loadScenario.js";
+import { writeOutputFile } from "../../io/writeOutputFile.js";
+import { frontierCsv } from "../../report/frontierCsv.js";
+import { frontierJson } from "../../report/frontierJson.js";
+import { frontierSvg } from "../../report/frontierSvg.js";
+import { frontierTable, type FrontierContext } from "../../report/frontierTable.js";
+import type { CliIo } from "../CliIo.js";
+import { emitOutput } from "../emitOutput.js";
+import { parseAmountOption, parseChoiceOption, parseIntegerOption } from "../parseOptionValues.js";
+import { ENGINES, FORMATS } from "./planCommand.js";
+
+interface FrontierOptions {
+  from?: string;
+  to?: string;
+  steps: string;
+  format: string;
+  out?: string;
+  chart?: string;
+  force?: boolean;
+  engine: string;
+}
+
+/** `averta frontier <scenario>`: the optimal list's KSI avoided, spend and B/C at a range of budgets. */
+export function registerFrontierCommand(program: Command, io: CliIo): void {
+  program
+    .command("frontier")
+    .description("solve the programme at a range of budgets and show what each extra million buys")
+    .argument("<scenario>", "scenario YAML file")
+    .option("--from <amount>", "lowest budget (default 0)")
+    .option("--to <amount>", "highest budget (default: the cost of funding every site's best alternative)")
+    .option("--steps <n>", "number of equal budget steps (levels = steps + 1)", "20")
+    .option("-f, --format <format>", "table, json or csv", "table")
+    .option("-o, --out <file>", "write to this file instead of standard output")
+    .option("--chart <file.svg>", "also write an SVG chart of KSI avoided against budget")
+    .option("--force", "replace --out or --chart if it already exists")
+    .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
+    .action(async (file: string, options: FrontierOptions) => {
+      const format = parseChoiceOption("--format", options.format, FORMATS);
+      const engine = parseChoiceOption("--engine", options.engine, ENGINES);
+      const steps = parseIntegerOption("--steps", options.steps, 1, 500);
+      const from = options.from === undefined ? 0 : parseAmountOption("--from", options.from);
+      const force = options.force === true;
+      if (options.out !== undefined) assertOutputWritable(options.out, force, "--out");
+      if (options.chart !== undefined) assertOutputWritable(options.chart, force, "--chart");
+      const { scenario } = loadScenario(file);
+      const prepared = preparePlan(scenario);
+      const to = options.to === undefined ? Math.max(from, fullFundingCost(prepared)) : parseAmountOption("--to", options.to);
+      if (to < from) {
+        throw new InputError([{ code: "bad-option", file: "--to", message: `${to} is below --from ${from}`, hint: "give --to an amount at least --from" }]);
+      }
+      const frontier = await budgetFrontier(prepared, budgetLevels(from, to, steps), { engine });
+      const summary = summariseFrontier(frontier);
+      const context: FrontierContext = { scenarioName: scenario.name, currency: scenario.currency, scenarioBudget: scenario.budget, objective: prepared.objective };
+      const content =
+        format === "json"
+          ? JSON.stringify(frontierJson(summary, context), null, 2) + "\n"
+          : format === "csv"
+            ? frontierCsv(summary, scenario.currency)
+            : frontierTable(summary, context);
+      if (options.chart !== undefined) {
+        writeOutputFile(options.chart, frontierSvg(summary, context), force);
+        io.stderr(`wrote ${options.chart}\n`);
+      }
+      emitOutput(io, content, options.out, force);
+    });
+}

@@ -1,0 +1,30 @@
+import type { FrontierSummary } from "../analysis/summariseFrontier.js";
+import { CAUTIONS } from "./cautions.js";
+import type { FrontierContext } from "./frontierTable.js";
+import { jsonNumber } from "./formatNumber.js";
+
+/** The budget frontier as a JSON document; undefined or infinite ratios are null. */
+export function frontierJson(summary: FrontierSummary, context: FrontierContext): object {
+  return {
+    scenario: context.scenarioName,
+    currency: context.currency,
+    objective: context.objective,
+    scenarioBudget: context.scenarioBudget,
+    marginalRateDefinition: "KSI avoided gained per extra 1,000,000 of budget since the previous level",
+    referenceKsiPerMillion: summary.referenceKsiPerMillion,
+    referenceDefinition: "the marginal rate of the first rising budget step (the 'first 1M')",
+    diminishingFrom: summary.diminishingFrom,
+    levels: summary.rows.map((row) => ({
+      budget: row.budget,
+      status: row.status,
+      spend: row.spend,
+      projects: row.projects,
+      ksiAvoided: row.ksiAvoided,
+      benefitPV: row.benefitPV,
+      bcRatio: jsonNumber(row.bcRatio),
+      marginalKsiPerMillion: row.marginalKsiPerMillion === null ? null : jsonNumber(row.marginalKsiPerMillion),
+      belowHalfOfFirst: row.diminishing,
+    })),
+    cautions: CAUTIONS,
+  };
+}

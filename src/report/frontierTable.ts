@@ -1,0 +1,54 @@
+import Table from "cli-table3";
+import type { FrontierSummary } from "../analysis/summariseFrontier.js";
+import { CAUTIONS } from "./cautions.js";
+import { formatFixed, formatMoney } from "./formatNumber.js";
+
+/** What a frontier report needs besides the rows. */
+export interface FrontierContext {
+  readonly scenarioName: string;
+  readonly currency: string;
+  /** The scenario's own budget, marked in the table and chart. */
+  readonly scenarioBudget: number;
+  readonly objective: "ksi" | "benefit";
+}
+
+/** The budget frontier as a terminal table with the diminishing-returns reading and the cautions. */
+export function frontierTable(summary: FrontierSummary, context: FrontierContext): string {
+  const { currency } = context;
+  const table = new Table({
+    head: [`Budget (${currency})`, "Status", `Spend (${currency})`, "Projects", "KSI avoided", `Benefit PV (${currency})`, "B/C", "KSI per extra 1M", ""],
+    colAligns: ["right", "left", "right", "right", "right", "right", "right", "right", "left"],
+    style: { head: [], border: [] },
+  } as ConstructorParameters<typeof Table>[0]);
+  for (const row of summary.rows) {
+    table.push([
+      formatMoney(row.budget) + (row.budget === context.scenarioBudget ? " ◀" : ""),
+      row.status,
+      formatMoney(row.spend),
+      String(row.projects),
+      formatFixed(row.ksiAvoided, 2),
+      formatMoney(row.benefitPV),
+      formatFixed(row.bcRatio, 2),
+      row.marginalKsiPerMillion === null ? "" : formatFixed(row.marginalKsiPerMillion, 2),
+      row.diminishing ? "< half" : "",
+    ]);
+  }
+  const reference = summary.referenceKsiPerMillion;
+  const lines = [
+    `${context.scenarioName}: budget frontier (${context.objective === "ksi" ? "maximising KSI crashes avoided" : "maximising benefit PV"} at each level)`,
+    `Scenario budget ${formatMoney(context.scenarioBudget)} ${currency}.`,
+    "",
+    table.toString(),
+    "KSI per extra 1M = (KSI avoided at this level − at the previous level) ÷ (budget step in millions).",
+    reference === null
+      ? "No rising budget step, so no diminishing-returns reading."
+      : `"First 1M" = the first step's rate, ${formatFixed(reference, 2)} KSI avoided per 1M; "< half" marks steps that buy less than half of it.`,
+    summary.diminishingFrom === null
+      ? "No point past which every further step buys less than half the first step's rate."
+      : `Past ${formatMoney(summary.diminishingFrom)} ${currency}, every further 1M buys less than half of what the first 1M bought.`,
+    "",
+    "Cautions:",
+    ...CAUTIONS.map((caution) => `- ${caution}`),
+  ];
+  return lines.join("\n") + "\n";
+}

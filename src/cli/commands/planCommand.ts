@@ -1,6 +1,7 @@
 import type { Command } from "commander";
 import { planProgramme } from "../../analysis/planProgramme.js";
 import { preparePlan } from "../../analysis/preparePlan.js";
+import { formatProblem } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
 import type { Objective } from "../../model/types.js";
 import { planCsv } from "../../report/planCsv.js";
@@ -40,7 +41,8 @@ export function registerPlanCommand(program: Command, io: CliIo): void {
       const engine = parseChoiceOption("--engine", options.engine, ENGINES);
       const objective = options.objective === undefined ? undefined : parseChoiceOption<Objective>("--objective", options.objective, ["ksi", "benefit"]);
       const budget = options.budget === undefined ? undefined : parseAmountOption("--budget", options.budget);
-      const { scenario } = loadScenario(file);
+      const { scenario, warnings } = loadScenario(file);
+      for (const warning of warnings) if (warning.code === "eb-fallback") io.stderr(`warning: ${formatProblem(warning)}\n`);
       const result = await planProgramme(preparePlan(scenario, objective), budget ?? scenario.budget, { engine });
       const content =
         format === "json" ? JSON.stringify(planJson(result), null, 2) + "\n" : format === "csv" ? planCsv(result) : planTable(result);

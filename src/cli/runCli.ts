@@ -3,6 +3,7 @@ import { InputError, formatProblem } from "../io/InputError.js";
 import type { CliIo } from "./CliIo.js";
 import { registerCheckCommand } from "./commands/checkCommand.js";
 import { registerPlanCommand } from "./commands/planCommand.js";
+import { registerTallyCommand } from "./commands/tallyCommand.js";
 
 /** Exit codes: 0 success, 1 internal fault, 2 bad input or usage. */
 export const EXIT_OK = 0;
@@ -19,6 +20,7 @@ export function createProgram(io: CliIo): Command {
     .exitOverride();
   registerCheckCommand(program, io);
   registerPlanCommand(program, io);
+  registerTallyCommand(program, io);
   for (const command of program.commands) command.exitOverride().configureOutput({ writeOut: io.stdout, writeErr: io.stderr });
   return program;
 }

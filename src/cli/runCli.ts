@@ -3,6 +3,7 @@ import { InputError, formatProblem } from "../io/InputError.js";
 import type { CliIo } from "./CliIo.js";
 import { registerCheckCommand } from "./commands/checkCommand.js";
 import { registerPlanCommand } from "./commands/planCommand.js";
+import { registerScreenCommand } from "./commands/screenCommand.js";
 import { registerTallyCommand } from "./commands/tallyCommand.js";
 
 /** Exit codes: 0 success, 1 internal fault, 2 bad input or usage. */
@@ -21,6 +22,7 @@ export function createProgram(io: CliIo): Command {
   registerCheckCommand(program, io);
   registerPlanCommand(program, io);
   registerTallyCommand(program, io);
+  registerScreenCommand(program, io);
   for (const command of program.commands) command.exitOverride().configureOutput({ writeOut: io.stdout, writeErr: io.stderr });
   return program;
 }

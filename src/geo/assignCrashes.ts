@@ -112,7 +112,7 @@ function nearestAtAnyDistance(index: SiteIndex, x: number, y: number, before: (a
       const element = cellElements[k]!;
       const s = elementSite[element]!;
       const d = pointSegmentDistance(x, y, elementXY[4 * element]!, elementXY[4 * element + 1]!, elementXY[4 * element + 2]!, elementXY[4 * element + 3]!);
-      if (d < bestD || (d === bestD && before(s, best))) {
+      if (d < bestD || (d === bestD && s !== best && before(s, best))) {
         best = s;
         bestD = d;
       }

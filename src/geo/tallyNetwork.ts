@@ -1,5 +1,5 @@
 import { buildCrashMatrix } from "../model/crashMatrix.js";
-import type { CrashType, Severity, Site } from "../model/types.js";
+import { CRASH_TYPES, SEVERITIES, type CrashType, type Severity, type Site } from "../model/types.js";
 import { assignCrashes, type AssignOptions } from "./assignCrashes.js";
 import { REJECT_REASONS, type CrashRecord, type RejectedRow, type RejectReason } from "./CrashRecord.js";
 import type { NetworkSite } from "./NetworkSite.js";
@@ -69,7 +69,10 @@ export function tallyNetwork(
   rejected.sort((a, b) => a.line - b.line);
 
   const assignment = assignCrashes(sites, kept.map((record) => record.location), options);
-  const counts = sites.map(() => new Map<string, number>());
+  // Counts per site in one flat array: site × crash type × severity.
+  const cellsPerSite = CRASH_TYPES.length * SEVERITIES.length;
+  const cellOf = (type: CrashType, severity: Severity) => CRASH_TYPES.indexOf(type) * SEVERITIES.length + SEVERITIES.indexOf(severity);
+  const counts = new Int32Array(sites.length * cellsPerSite);
   const yearSets = sites.map(() => new Set<number>());
   const districtCounts = new Map<string, { crashes: number; unassigned: number }>();
   const unassignedLines: number[] = [];
@@ -89,15 +92,14 @@ export function tallyNetwork(
       return;
     }
     assigned++;
-    const key = `${record.type}/${record.severity}`;
-    counts[site]!.set(key, (counts[site]!.get(key) ?? 0) + 1);
+    counts[site * cellsPerSite + cellOf(record.type, record.severity)]!++;
     yearSets[site]!.add(record.year);
   });
 
   const rejectedByReason = Object.fromEntries(REJECT_REASONS.map((reason) => [reason, 0])) as Record<RejectReason, number>;
   for (const row of rejected) rejectedByReason[row.reason]++;
   return {
-    sites: sites.map((site, index) => toScenarioSite(site, (type, severity) => counts[index]!.get(`${type}/${severity}`) ?? 0)),
+    sites: sites.map((site, index) => toScenarioSite(site, (type, severity) => counts[index * cellsPerSite + cellOf(type, severity)]!)),
     quality: {
       window: span,
       rowsRead: rows.rowsRead,

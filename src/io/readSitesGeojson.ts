@@ -86,18 +86,27 @@ function geometryPaths(geometry: { type?: unknown; coordinates?: unknown } | und
     const points = value.map(position);
     return points.every((p): p is GeoPoint => p !== undefined) ? points : undefined;
   };
-  if (geometry === undefined || geometry === null) return report("the feature has no geometry"), undefined;
+  if (geometry === undefined || geometry === null) {
+    report("the feature has no geometry");
+    return undefined;
+  }
+  let paths: (GeoPoint[] | undefined)[] | undefined;
+  let problem = "";
   if (geometry.type === "Point") {
     const point = position(geometry.coordinates);
-    return point ? [[point]] : (report("a Point needs coordinates [longitude, latitude] within ±180, ±90"), undefined);
+    paths = [point ? [point] : undefined];
+    problem = "a Point needs coordinates [longitude, latitude] within ±180, ±90";
+  } else if (geometry.type === "LineString") {
+    paths = [line(geometry.coordinates)];
+    problem = "a LineString needs two or more [longitude, latitude] positions";
+  } else if (geometry.type === "MultiLineString" && Array.isArray(geometry.coordinates) && geometry.coordinates.length > 0) {
+    paths = geometry.coordinates.map(line);
+    problem = "each line of a MultiLineString needs two or more positions";
   }
-  if (geometry.type === "LineString") {
-    const path = line(geometry.coordinates);
-    return path ? [path] : (report("a LineString needs two or more [longitude, latitude] positions"), undefined);
-  }
-  if (geometry.type === "MultiLineString" && Array.isArray(geometry.coordinates) && geometry.coordinates.length > 0) {
-    const paths = geometry.coordinates.map(line);
-    return paths.every((p): p is GeoPoint[] => p !== undefined) ? paths : (report("each line of a MultiLineString needs two or more positions"), undefined);
+  if (paths !== undefined) {
+    if (paths.every((p): p is GeoPoint[] => p !== undefined)) return paths;
+    report(problem);
+    return undefined;
   }
   report(`geometry type '${String(geometry.type)}' is not supported`);
   return undefined;

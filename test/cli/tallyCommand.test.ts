@@ -42,6 +42,18 @@ describe("averta tally on the demo network", () => {
     expect(report).toMatch(/1505 assigned \+ 1 unassigned \+ 5 rejected = 1511 of 1511 rows read/);
     expect(io.err.join("")).toMatch(/line 1507: missing-coordinates/);
   });
+  it("writes a sites block that makes a valid scenario with the demo's settings", () => {
+    const demo = readFileSync("scenarios/demo.yaml", "utf8");
+    const settings = demo
+      .slice(0, demo.indexOf("\nsites:\n") + 1)
+      .replace(/^crashWindow:.*\n/m, "")
+      .replace("../catalogs/demo-catalogue.yaml", join(process.cwd(), "catalogs/demo-catalogue.yaml"));
+    const file = join(folder, "rebuilt.yaml");
+    writeFileSync(file, settings + readFileSync(out, "utf8"));
+    const { scenario } = loadScenario(file);
+    expect(scenario.sites).toHaveLength(51);
+    expect(scenario.crashWindow).toEqual({ firstYear: 2021, lastYear: 2025 });
+  });
   it("refuses to overwrite either output without --force, and replaces both with it", async () => {
     const io = capture();
     expect(await runCli(["tally", "--crashes", crashes, "--sites", sites, "--out", out], io)).toBe(2);

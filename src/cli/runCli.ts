@@ -7,6 +7,8 @@ import { registerFrontierCommand } from "./commands/frontierCommand.js";
 import { registerPlanCommand } from "./commands/planCommand.js";
 import { registerUncertaintyCommand } from "./commands/uncertaintyCommand.js";
 import { registerReportCommand } from "./commands/reportCommand.js";
+import { registerScreenCommand } from "./commands/screenCommand.js";
+import { registerTallyCommand } from "./commands/tallyCommand.js";
 
 /** Exit codes: 0 success, 1 internal fault, 2 bad input or usage. */
 export const EXIT_OK = 0;
@@ -27,6 +29,8 @@ export function createProgram(io: CliIo): Command {
   registerReportCommand(program, io);
   registerFrontierCommand(program, io);
   registerCompareCommand(program, io);
+  registerTallyCommand(program, io);
+  registerScreenCommand(program, io);
   for (const command of program.commands) command.exitOverride().configureOutput({ writeOut: io.stdout, writeErr: io.stderr });
   return program;
 }

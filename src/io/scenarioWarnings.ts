@@ -1,4 +1,5 @@
 import { sumCrashMatrix } from "../model/crashMatrix.js";
+import { empiricalBayesGap } from "../model/siteBaselines.js";
 import type { Scenario } from "../model/types.js";
 import type { InputProblem } from "./InputError.js";
 import type { LoadedCatalogue } from "./loadCatalogue.js";
@@ -47,5 +48,14 @@ export function scenarioWarnings(
       warnings.push({ code: "no-crashes", file: source.file, ...source.positionOf(["sites", index, "crashes"]), path: `sites[${index}].crashes`, message: `site '${site.id}' has no recorded crashes, so no treatment there can avoid any`, hint: "check the crash assignment, or use an Empirical Bayes baseline" });
     }
   });
+  if (scenario.baseline === "empirical-bayes") {
+    const performanceFunctions = new Map(scenario.catalogue.performanceFunctions.map((spf) => [spf.id, spf]));
+    scenario.sites.forEach((site, index) => {
+      const gap = empiricalBayesGap(site, site.performanceFunction === undefined ? undefined : performanceFunctions.get(site.performanceFunction));
+      if (gap !== undefined) {
+        warnings.push({ code: "eb-fallback", file: source.file, ...source.positionOf(["sites", index]), path: `sites[${index}]`, message: `site '${site.id}' will use its observed counts, not Empirical Bayes: ${gap}`, hint: "give the site aadt and a performanceFunction that applies to its kind (and lengthKm for a segment)" });
+      }
+    });
+  }
   return warnings;
 }

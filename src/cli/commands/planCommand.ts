@@ -2,6 +2,7 @@ import type { Command } from "commander";
 import { casePlan } from "../../analysis/casePlan.js";
 import { planProgramme } from "../../analysis/planProgramme.js";
 import { preparePlan } from "../../analysis/preparePlan.js";
+import { formatProblem } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
 import type { Objective } from "../../model/types.js";
 import { planCsv } from "../../report/planCsv.js";
@@ -45,6 +46,7 @@ export function registerPlanCommand(program: Command, io: CliIo): void {
       const budget = options.budget === undefined ? undefined : parseAmountOption("--budget", options.budget);
       const { scenario, warnings } = loadScenario(file);
       if (warnings.length > 0) io.stderr(`note: ${warnings.length} warning(s) about the input; 'averta check ${file}' lists them\n`);
+      for (const warning of warnings) if (warning.code === "eb-fallback") io.stderr(`warning: ${formatProblem(warning)}\n`);
       const result = await planProgramme(preparePlan(scenario, objective), budget ?? scenario.budget, { engine });
       const planCase = format === "csv" ? undefined : casePlan(result);
       const content =

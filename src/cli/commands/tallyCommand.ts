@@ -1,0 +1,76 @@
+import type { Command } from "commander";
+import { basename } from "node:path";
+import { DEFAULT_ASSIGN_OPTIONS } from "../../geo/assignCrashes.js";
+import { tallyNetwork, type CrashWindow } from "../../geo/tallyNetwork.js";
+import { DEFAULT_CRASH_MAPPING } from "../../io/CrashMapping.js";
+import { InputError } from "../../io/InputError.js";
+import { readCrashCsv } from "../../io/readCrashCsv.js";
+import { readCrashMapping } from "../../io/readCrashMapping.js";
+import { readSitesGeojson } from "../../io/readSitesGeojson.js";
+import { writeOutputFiles } from "../../io/writeOutputFiles.js";
+import { crashQualityText } from "../../report/crashQualityText.js";
+import { sitesYaml } from "../../report/sitesYaml.js";
+import type { CliIo } from "../CliIo.js";
+
+interface TallyOptions {
+  crashes: string;
+  sites: string;
+  window?: string;
+  mapping?: string;
+  out: string;
+  force?: boolean;
+  radius: string;
+  buffer: string;
+}
+
+/** Terminal lists of bad rows stop here; the saved report has them all. */
+const LISTED_ON_TERMINAL = 20;
+
+/** `averta tally`: count geolocated crashes by site and write a scenario's sites block. */
+export function registerTallyCommand(program: Command, io: CliIo): void {
+  program
+    .command("tally")
+    .description("assign geolocated crashes to sites and write the sites block of a scenario, with a data-quality report")
+    .requiredOption("--crashes <file>", "crash records, CSV (RFC 4180, UTF-8) with id, date, latitude, longitude, severity, type")
+    .requiredOption("--sites <file>", "sites, GeoJSON FeatureCollection: Points (intersections), LineStrings (segments, corridors)")
+    .option("--window <years>", "crash years to count, e.g. 2021-2025 (default: the years the data span)")
+    .option("--mapping <file>", "YAML mapping of column names and agency codes (columns:, severity:, type:)")
+    .option("-o, --out <file>", "sites YAML to write; the report goes beside it as <out>.quality.txt", "scenario-sites.yaml")
+    .option("--force", "replace the output files if they exist")
+    .option("--radius <metres>", "influence radius of an intersection", String(DEFAULT_ASSIGN_OPTIONS.intersectionRadiusM))
+    .option("--buffer <metres>", "buffer either side of a segment or corridor", String(DEFAULT_ASSIGN_OPTIONS.segmentBufferM))
+    .action((options: TallyOptions) => {
+      const window = options.window === undefined ? undefined : parseWindow(options.window);
+      const intersectionRadiusM = parseMetres("--radius", options.radius);
+      const segmentBufferM = parseMetres("--buffer", options.buffer);
+      const mapping = options.mapping === undefined ? DEFAULT_CRASH_MAPPING : readCrashMapping(options.mapping);
+      const sites = readSitesGeojson(options.sites);
+      const rows = readCrashCsv(options.crashes, mapping);
+      const { sites: tallied, quality } = tallyNetwork(sites, rows, window, { intersectionRadiusM, segmentBufferM });
+      const inputs = { crashes: options.crashes, sites: options.sites };
+      const provenance = `Written by averta tally from ${basename(options.crashes)} and ${basename(options.sites)} (radius ${intersectionRadiusM} m, buffer ${segmentBufferM} m).`;
+      const report = crashQualityText(quality, inputs);
+      const qualityFile = `${options.out}.quality.txt`;
+      writeOutputFiles([{ path: options.out, content: sitesYaml(tallied, quality.window, provenance) }, { path: qualityFile, content: report }], options.force === true);
+      io.stderr(crashQualityText(quality, inputs, LISTED_ON_TERMINAL));
+      io.stderr(`wrote ${options.out} (${tallied.length} sites) and ${qualityFile}\n`);
+    });
+}
+
+function parseWindow(text: string): CrashWindow {
+  const match = /^\s*(\d{4})\s*-\s*(\d{4})\s*$/.exec(text);
+  const firstYear = Number(match?.[1]);
+  const lastYear = Number(match?.[2]);
+  if (!match || lastYear < firstYear) {
+    throw new InputError([{ code: "bad-option", file: "--window", message: `'${text}' is not a range of years`, hint: "write it as 2021-2025, earliest year first" }]);
+  }
+  return { firstYear, lastYear };
+}
+
+function parseMetres(option: string, text: string): number {
+  const value = Number(text);
+  if (!(text.trim() !== "" && Number.isFinite(value) && value >= 0 && value <= 1000)) {
+    throw new InputError([{ code: "bad-option", file: option, message: `'${text}' is not a distance from 0 to 1000 metres`, hint: `give ${option} in metres, e.g. 50` }]);
+  }
+  return value;
+}

@@ -1,0 +1,42 @@
+import type { CrashType, GeoPoint, Severity } from "../model/types.js";
+
+/** One usable crash from a crash file, with the line it starts on. */
+export interface CrashRecord {
+  readonly line: number;
+  readonly id: string;
+  readonly year: number;
+  readonly severity: Severity;
+  readonly type: CrashType;
+  readonly location: GeoPoint;
+}
+
+/** Why a crash row was set aside. */
+export type RejectReason =
+  | "wrong-field-count"
+  | "missing-id"
+  | "invalid-date"
+  | "missing-coordinates"
+  | "invalid-coordinates"
+  | "unknown-severity"
+  | "unknown-type"
+  | "outside-window"
+  | "duplicate-id";
+
+export const REJECT_REASONS: readonly RejectReason[] = [
+  "wrong-field-count",
+  "missing-id",
+  "invalid-date",
+  "missing-coordinates",
+  "invalid-coordinates",
+  "unknown-severity",
+  "unknown-type",
+  "outside-window",
+  "duplicate-id",
+];
+
+/** A crash row that was not counted, with its line and what was wrong. */
+export interface RejectedRow {
+  readonly line: number;
+  readonly reason: RejectReason;
+  readonly message: string;
+}

@@ -1,0 +1,52 @@
+import { REJECT_REASONS } from "../geo/CrashRecord.js";
+import type { CrashDataQuality } from "../geo/tallyNetwork.js";
+
+/** Years of crash data below which counts are too noisy to rank sites (common practice: 3 to 5 years). */
+export const MIN_WINDOW_YEARS = 3;
+
+/**
+ * The data-quality account of a tally as plain text: where every row went (assigned, unassigned,
+ * rejected by reason, adding up to the rows read), unassigned shares by district, years with
+ * crashes per site, and the rejected rows with their lines. `maxListed` caps the row lists
+ * (for the terminal); the saved report lists everything.
+ */
+export function crashQualityText(quality: CrashDataQuality, inputs: { readonly crashes: string; readonly sites: string }, maxListed = Infinity): string {
+  const { window } = quality;
+  const windowYears = window.lastYear - window.firstYear + 1;
+  const rejectedCount = quality.rejected.length;
+  const percent = (part: number, whole: number) => (whole > 0 ? `${((100 * part) / whole).toFixed(1)}%` : "-");
+  const lines = [
+    `Crash data quality: ${inputs.crashes} against ${inputs.sites}, window ${window.firstYear}-${window.lastYear} (${windowYears} year${windowYears === 1 ? "" : "s"})`,
+    `  rows read              ${quality.rowsRead}`,
+    `  assigned to a site     ${quality.assigned} (${percent(quality.assigned, quality.rowsRead)})`,
+    `  unassigned             ${quality.unassigned}, of which ${quality.outsideExtent} outside the sites' extent`,
+    `  rejected               ${rejectedCount}`,
+    ...REJECT_REASONS.filter((reason) => quality.rejectedByReason[reason] > 0).map((reason) => `    ${reason.padEnd(22)}${quality.rejectedByReason[reason]}`),
+    `  ${quality.assigned} assigned + ${quality.unassigned} unassigned + ${rejectedCount} rejected = ${quality.assigned + quality.unassigned + rejectedCount} of ${quality.rowsRead} rows read`,
+    "",
+    "Unassigned share by district (an unassigned crash counts in its nearest site's district):",
+    ...quality.districts.map((d) => `  ${d.district.padEnd(24)}${d.unassigned} of ${d.crashes} (${percent(d.unassigned, d.crashes)})`),
+    "",
+  ];
+  const gaps = quality.yearsBySite.filter((entry) => entry.years.length < windowYears);
+  lines.push(`Years with crashes per site: ${quality.yearsBySite.length - gaps.length} of ${quality.yearsBySite.length} sites have crashes in every year of the window`);
+  for (const entry of gaps.slice(0, maxListed)) {
+    const missing: number[] = [];
+    for (let year = window.firstYear; year <= window.lastYear; year++) if (!entry.years.includes(year)) missing.push(year);
+    lines.push(`  ${entry.site}: ${entry.years.length === 0 ? "no crashes" : `crashes in ${entry.years.join(", ")}; none in ${missing.join(", ")}`}`);
+  }
+  if (gaps.length > maxListed) lines.push(`  … and ${gaps.length - maxListed} more sites`);
+  if (rejectedCount > 0) {
+    lines.push("", "Rejected rows:");
+    for (const row of quality.rejected.slice(0, maxListed)) lines.push(`  line ${row.line}: ${row.reason}: ${row.message}`);
+    if (rejectedCount > maxListed) lines.push(`  … and ${rejectedCount - maxListed} more (all are listed in the saved report)`);
+  }
+  if (quality.unassigned > 0) {
+    const shown = quality.unassignedLines.slice(0, maxListed);
+    lines.push("", `Unassigned rows (no site within reach), lines: ${shown.join(", ")}${quality.unassigned > shown.length ? ", …" : ""}`);
+  }
+  if (windowYears < MIN_WINDOW_YEARS) {
+    lines.push("", `warning: the window covers ${windowYears} year(s); common practice is 3 to 5 years (short windows overstate sites with a chance bad year: regression to the mean)`);
+  }
+  return lines.join("\n") + "\n";
+}

@@ -1,0 +1,30 @@
+import Table from "cli-table3";
+import type { NetworkScreening } from "../model/screenSites.js";
+import { CAUTIONS } from "./cautions.js";
+import { formatFixed } from "./formatNumber.js";
+
+/** The screening ranking as a terminal table (the first `rows` sites), with the proposal and cautions. */
+export function screenTable(screening: NetworkScreening, title: string, rows: number): string {
+  const table = new Table({
+    head: ["Rank", "Site", "Name", "District", "KSI/yr observed", "KSI/yr predicted", "KSI/yr EB expected", "Excess KSI/yr", "Rank by observed"],
+    colAligns: ["right", "left", "left", "left", "right", "right", "right", "right", "right"],
+    style: { head: [], border: [] },
+    wordWrap: true,
+    colWidths: [null, null, 30],
+  } as ConstructorParameters<typeof Table>[0]);
+  const value = (x: number | undefined) => (x === undefined ? "-" : formatFixed(x, 3));
+  for (const entry of screening.sites.slice(0, rows)) {
+    table.push([entry.excessRank, entry.site.id, entry.site.name, entry.site.district, value(entry.observedKsiPerYear), value(entry.predictedKsiPerYear), value(entry.expectedKsiPerYear), value(entry.excessKsiPerYear), entry.observedRank]);
+  }
+  const withoutEb = screening.sites.filter((entry) => entry.note !== undefined);
+  return [
+    `Network screening: ${title}`,
+    "Ranked by excess expected KSI crashes a year (Empirical Bayes expected minus SPF predicted, K+A).",
+    table.toString(),
+    `Proposed for the programme (top ${screening.proposed.length} by excess): ${screening.proposed.join(", ") || "none"}`,
+    ...(withoutEb.length > 0 ? [`${withoutEb.length} site(s) have no EB estimate and rank last, by observed KSI: ${withoutEb.slice(0, 5).map((e) => `${e.site.id} (${e.note})`).join("; ")}${withoutEb.length > 5 ? "; …" : ""}`] : []),
+    "",
+    ...CAUTIONS,
+    "",
+  ].join("\n");
+}

@@ -1,0 +1,74 @@
+import { mkdtempSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { describe, expect, it } from "vitest";
+import { InputError } from "../../src/io/InputError.js";
+import { readCrashMapping } from "../../src/io/readCrashMapping.js";
+import { readSitesGeojson } from "../../src/io/readSitesGeojson.js";
+
+const folder = mkdtempSync(join(tmpdir(), "averta-geo-"));
+const write = (name: string, text: string) => {
+  const file = join(folder, name);
+  writeFileSync(file, text);
+  return file;
+};
+const problemsOf = (action: () => unknown) => {
+  try {
+    action();
+  } catch (error) {
+    if (error instanceof InputError) return error.problems;
+    throw error;
+  }
+  throw new Error("expected an InputError");
+};
+
+describe("readSitesGeojson (RFC 7946 FeatureCollection)", () => {
+  it("reads Points as intersections and (Multi)LineStrings as segments or corridors", () => {
+    const file = write(
+      "ok.geojson",
+      JSON.stringify({
+        type: "FeatureCollection",
+        features: [
+          { type: "Feature", properties: { id: "I-1", district: "N", aadt: 9000, candidates: ["a"] }, geometry: { type: "Point", coordinates: [10.4, 55.4] } },
+          { type: "Feature", properties: { id: 7, name: "Ring", kind: "corridor", district: "N", tags: ["x"] }, geometry: { type: "MultiLineString", coordinates: [[[10.4, 55.4], [10.41, 55.4]], [[10.41, 55.4], [10.42, 55.41]]] } },
+        ],
+      }),
+    );
+    const sites = readSitesGeojson(file);
+    expect(sites.map((s) => [s.id, s.kind, s.paths.length, s.name])).toEqual([["I-1", "intersection", 1, "I-1"], ["7", "corridor", 2, "Ring"]]);
+    expect(sites[0]!.aadt).toBe(9000);
+  });
+  it("reports every bad feature with its line and field path", () => {
+    const text = [
+      "{",
+      '  "type": "FeatureCollection",',
+      '  "features": [',
+      '    { "type": "Feature", "properties": { "id": "S-1", "district": "N", "kind": "intersection" }, "geometry": { "type": "LineString", "coordinates": [[10.4, 55.4], [10.5, 55.4]] } },',
+      '    { "type": "Feature", "properties": { "id": "S-2", "district": "N" }, "geometry": { "type": "LineString", "coordinates": [[10.4, 55.4]] } },',
+      '    { "type": "Feature", "properties": { "id": "S-1", "district": "N", "aadt": "lots" }, "geometry": { "type": "Point", "coordinates": [200, 55] } }',
+      "  ]",
+      "}",
+    ].join("\n");
+    const problems = problemsOf(() => readSitesGeojson(write("bad.geojson", text)));
+    expect(problems.map((p) => [p.line, p.path])).toEqual([
+      [4, "features[0].geometry"],
+      [5, "features[1].geometry"],
+      [6, "features[2].properties.id"],
+      [6, "features[2].geometry"],
+    ]);
+  });
+});
+
+describe("readCrashMapping", () => {
+  it("reads columns and agency codes", () => {
+    const mapping = readCrashMapping(write("m.yaml", 'columns: { latitude: LAT }\nseverity: { "1": K, "5": o }\ntype: { PED: pedestrian }\n'));
+    expect(mapping.columns.latitude).toBe("LAT");
+    expect(mapping.columns.id).toBe("id");
+    expect(mapping.severity).toEqual({ "1": "K", "5": "O" });
+    expect(mapping.type).toEqual({ PED: "pedestrian" });
+  });
+  it("points at a code mapped to something that is not KABCO, and at an unknown field", () => {
+    const problems = problemsOf(() => readCrashMapping(write("bad.yaml", "columns:\n  lattitude: LAT\nseverity:\n  '9': X\n")));
+    expect(problems.map((p) => [p.code, p.line])).toEqual([["mapping", 2], ["mapping", 4]]);
+  });
+});

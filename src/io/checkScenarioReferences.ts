@@ -64,7 +64,7 @@ export function checkScenarioReferences(
         return;
       }
       if (!treatment.appliesTo.includes(site.kind)) {
-        problem("not-applicable", path, `treatment '${id}' does not apply to a ${site.kind}`, `it applies to: ${treatment.appliesTo.join(", ")}`);
+        problem("not-applicable", path, `treatment '${id}' does not apply to ${site.kind === "intersection" ? "an" : "a"} ${site.kind}`, `it applies to: ${treatment.appliesTo.join(", ")}`);
       }
       if (treatment.cost.basis === "per-km" && site.lengthKm === undefined) {
         problem("missing-length", ["sites", index], `treatment '${id}' is costed per km but site '${site.id}' has no lengthKm`, "add lengthKm to the site");

@@ -1,4 +1,5 @@
-import { dirname, relative, resolve } from "node:path";
+import { existsSync, realpathSync } from "node:fs";
+import { dirname, isAbsolute, join, relative, resolve, sep } from "node:path";
 import { completeCrashMatrix } from "../model/crashMatrix.js";
 import type {
   BaselineMethod,
@@ -84,20 +85,31 @@ export function loadScenario(file: string): LoadedScenario {
   if (schemaProblems.length > 0) throw new InputError(schemaProblems);
   const raw = source.data as RawScenario;
 
+  const seen = new Map<string, number>();
   const catalogues = raw.catalogues.map((path, index) => {
+    const at = { file: source.file, ...source.positionOf(["catalogues", index]), path: `catalogues[${index}]` };
+    const resolved = resolve(dirname(file), path);
+    const outside = !isAbsolute(path) && !catalogueAllowed(file, resolved);
+    if (outside) {
+      throw new InputError([{ code: "catalogue-outside", ...at, message: `catalogue '${path}' lies outside the scenario's folder and every 'catalogs' folder above it (${resolved})`, hint: CATALOGUE_PLACES }]);
+    }
+    const earlier = seen.get(resolved);
+    if (earlier !== undefined) {
+      throw new InputError([{ code: "duplicate-id", ...at, message: `catalogue '${path}' is already listed at catalogues[${earlier}]`, hint: "list each catalogue once" }]);
+    }
+    seen.set(resolved, index);
     try {
-      const resolved = resolve(dirname(file), path);
       return loadCatalogue(resolved, relative(process.cwd(), resolved) || resolved);
     } catch (error) {
-      if (error instanceof InputError && error.code === "missing-file") {
+      // A catalogue that cannot be opened is a mistake in the scenario's list: point there.
+      if (error instanceof InputError && (error.code === "missing-file" || error.code === "not-a-file")) {
+        const missing = error.code === "missing-file";
         throw new InputError([
           {
             ...error.problems[0]!,
-            file: source.file,
-            ...source.positionOf(["catalogues", index]),
-            path: `catalogues[${index}]`,
-            message: `catalogue '${path}' was not found (looked in ${resolve(dirname(file), path)})`,
-            hint: "catalogue paths are relative to the scenario file",
+            ...at,
+            message: missing ? `catalogue '${path}' was not found (looked in ${resolved})` : `catalogue '${path}' is a folder, not a file`,
+            hint: missing ? "catalogue paths are relative to the scenario file" : "name the catalogue's .yaml file",
           },
         ]);
       }
@@ -114,6 +126,27 @@ export function loadScenario(file: string): LoadedScenario {
 
   const scenario = toScenario(raw, catalogue);
   return { scenario, source, catalogues, warnings: scenarioWarnings(scenario, raw, source, catalogues) };
+}
+
+const CATALOGUE_PLACES =
+  "a relative catalogue path must stay inside the scenario's folder or a 'catalogs' folder in it or above it (e.g. ../catalogs/x.yaml); give an absolute path to use a catalogue elsewhere";
+
+/**
+ * The catalogue path policy: a relative path may only reach the scenario's own folder tree or a
+ * folder named `catalogs` directly inside the scenario's folder or one of its ancestors, judged
+ * after symbolic links are followed. A scenario shared with others then cannot quietly read
+ * files from elsewhere on their disk; an absolute path is an explicit choice and is accepted.
+ */
+function catalogueAllowed(scenarioFile: string, resolved: string): boolean {
+  const real = (path: string) => (existsSync(path) ? realpathSync(path) : path);
+  const inside = (path: string, folder: string) => path === folder || path.startsWith(folder.endsWith(sep) ? folder : folder + sep);
+  const folder = real(dirname(resolve(scenarioFile)));
+  const target = real(resolved);
+  if (inside(target, folder)) return true;
+  for (let ancestor = folder; ; ancestor = dirname(ancestor)) {
+    if (inside(target, real(join(ancestor, "catalogs")))) return true;
+    if (dirname(ancestor) === ancestor) return false;
+  }
 }
 
 function amount(value: Amount): number {

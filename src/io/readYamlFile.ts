@@ -1,11 +1,13 @@
 import { readFileSync, statSync } from "node:fs";
-import { isMap, isScalar, LineCounter, parseDocument, type Document, type Node } from "yaml";
+import { isAlias, isCollection, isMap, isPair, isScalar, LineCounter, parseDocument, visit, type Document, type Node } from "yaml";
 import { InputError, type InputProblem } from "./InputError.js";
 
 /** Largest input file we read: a programme of 100,000 sites fits well below it. */
 export const MAX_INPUT_BYTES = 64 * 1024 * 1024;
 /** Alias expansions allowed when converting YAML to data (guards against alias bombs). */
 const MAX_ALIAS_COUNT = 1000;
+/** Deepest nesting of lists and mappings accepted; a scenario needs about six levels. */
+export const MAX_NESTING_DEPTH = 100;
 
 export type PathSegment = string | number;
 
@@ -27,33 +29,40 @@ export function readYamlFile(file: string, label: string = file): YamlSource {
   const doc = parseDocument(text, { lineCounter, uniqueKeys: true, prettyErrors: false, strict: true });
   const problems: InputProblem[] = doc.errors.map((error) => {
     const { line, col } = lineCounter.linePos(error.pos[0]);
+    const at = { file: label, line, column: col };
+    // The parser reports its own stack running out as RESOURCE_EXHAUSTION: that is nesting, not syntax.
+    if (error.code === "RESOURCE_EXHAUSTION") return { code: "too-deep", ...at, message: "the document is nested too deeply to read", hint: TOO_DEEP_HINT };
+    if (error.code === "MULTIPLE_DOCS") {
+      return { code: "yaml-syntax", ...at, message: "the file holds more than one YAML document", hint: "keep one scenario or catalogue per file: remove this '---' and what follows it" };
+    }
     return {
       code: error.code === "DUPLICATE_KEY" ? "duplicate-key" : "yaml-syntax",
-      file: label,
-      line,
-      column: col,
+      ...at,
       message: firstLine(error.message),
       hint: yamlHint(error.code, text, error.pos[0]),
     };
   });
-  if (problems.length > 0) throw new InputError(problems);
+  if (problems.length > 0) throw new InputError(problems.slice(0, 1).concat(problems.slice(1).filter((p) => p.code !== "too-deep")));
+  const deep = firstTooDeepNode(doc);
+  if (deep !== undefined) {
+    const { line, col } = lineCounter.linePos(deep);
+    throw new InputError([{ code: "too-deep", file: label, line, column: col, message: `lists and mappings are nested more than ${MAX_NESTING_DEPTH} levels deep`, hint: TOO_DEEP_HINT }]);
+  }
 
   let data: unknown;
   try {
     data = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
   } catch (error) {
-    const message = error instanceof Error ? error.message : String(error);
-    const tooDeep = error instanceof RangeError;
+    const tooDeep = error instanceof RangeError && /call stack/i.test(error.message);
+    const { line, col } = lineCounter.linePos(tooDeep ? 0 : firstAliasOffset(doc));
     throw new InputError([
       {
         code: tooDeep ? "too-deep" : "yaml-aliases",
         file: label,
-        line: 1,
-        column: 1,
-        message: tooDeep ? "the document is nested too deeply to read" : firstLine(message),
-        hint: tooDeep
-          ? "a scenario needs only a few levels of nesting; check for runaway indentation"
-          : "anchors and aliases expand to too much data; write the values out instead",
+        line,
+        column: col,
+        message: tooDeep ? "the document is nested too deeply to read" : `aliases (*name) expand to more than ${MAX_ALIAS_COUNT} copies of their anchors`,
+        hint: tooDeep ? TOO_DEEP_HINT : "anchors and aliases expand to too much data; write the values out instead",
       },
     ]);
   }
@@ -62,6 +71,35 @@ export function readYamlFile(file: string, label: string = file): YamlSource {
     data,
     positionOf: (path, key = false) => positionOf(doc, lineCounter, path, key),
   };
+}
+
+const TOO_DEEP_HINT = "a scenario needs only a few levels of nesting; check for runaway indentation or brackets";
+
+// Walks the tree without recursion, so depth itself cannot exhaust the stack; returns the first
+// node's offset deeper than the limit.
+function firstTooDeepNode(doc: Document): number | undefined {
+  const stack: { node: unknown; depth: number }[] = [{ node: doc.contents, depth: 0 }];
+  while (stack.length > 0) {
+    const { node, depth } = stack.pop()!;
+    if (!isCollection(node)) continue;
+    if (depth >= MAX_NESTING_DEPTH) return node.range?.[0] ?? 0;
+    for (const item of node.items as unknown[]) {
+      if (isPair(item)) stack.push({ node: item.key, depth: depth + 1 }, { node: item.value, depth: depth + 1 });
+      else stack.push({ node: item, depth: depth + 1 });
+    }
+  }
+  return undefined;
+}
+
+function firstAliasOffset(doc: Document): number {
+  let offset = 0;
+  visit(doc, {
+    Alias(_key, node) {
+      if (isAlias(node)) offset = node.range?.[0] ?? 0;
+      return visit.BREAK;
+    },
+  });
+  return offset;
 }
 
 function readUtf8(file: string, label: string): string {

@@ -15,7 +15,7 @@ function validatorFor(name: SchemaName): ValidateFunction {
   let validate = compiled.get(name);
   if (!validate) {
     const schema = JSON.parse(readFileSync(join(packageRoot(), "schema", `${name}.schema.json`), "utf8"));
-    validate = new Ajv({ allErrors: true, strict: false }).compile(schema);
+    validate = new Ajv({ allErrors: true, strict: false, verbose: true }).compile(schema);
     compiled.set(name, validate);
   }
   return validate;
@@ -37,6 +37,7 @@ export function validateWithSchema(source: YamlSource, name: SchemaName): InputP
   return problems;
 }
 
+// `verbose` gives each error its parentSchema, whose description becomes the hint.
 function describe(error: ErrorObject, source: YamlSource): InputProblem {
   const path = parseJsonPointer(error.instancePath);
   const params = error.params as Record<string, unknown>;
@@ -44,6 +45,11 @@ function describe(error: ErrorObject, source: YamlSource): InputProblem {
   const base = { code: "schema", file: source.file };
   const at = (segments: typeof path, key = false) => ({ ...source.positionOf(segments, key), path: formatFieldPath(segments) || "(top level)" });
 
+  const value = valueAt(source.data, path);
+  if (typeof value === "number" && !Number.isFinite(value)) {
+    // YAML's .inf and .nan are numbers to the schema; say so plainly whatever bound tripped (duplicates merge by path).
+    return { ...base, ...at(path), message: `must be a finite number, found ${Number.isNaN(value) ? ".nan" : value > 0 ? ".inf" : "-.inf"}`, hint: description ?? "write an ordinary number" };
+  }
   switch (error.keyword) {
     case "required": {
       const missing = String(params.missingProperty);
@@ -76,10 +82,10 @@ function describe(error: ErrorObject, source: YamlSource): InputProblem {
         ...base,
         ...at(path),
         message: `must be ${article(String(params.type))}, found ${describeValue(valueAt(source.data, path))}`,
-        hint: description,
+        hint: description ?? `write ${article(String(params.type))} here`,
       };
     case "pattern":
-      return { ...base, ...at(path), message: `'${String(valueAt(source.data, path))}' has the wrong form`, hint: description };
+      return { ...base, ...at(path), message: `'${String(valueAt(source.data, path))}' has the wrong form`, hint: description ?? `it must match ${String(params.pattern)}` };
     case "minimum":
     case "maximum":
     case "exclusiveMinimum":
@@ -88,10 +94,10 @@ function describe(error: ErrorObject, source: YamlSource): InputProblem {
         ...base,
         ...at(path),
         message: `must be ${String(params.comparison)} ${String(params.limit)}, found ${String(valueAt(source.data, path))}`,
-        hint: description,
+        hint: description ?? `use a value ${String(params.comparison)} ${String(params.limit)}`,
       };
     case "minItems":
-      return { ...base, ...at(path), message: `must list at least ${String(params.limit)} item(s)`, hint: description };
+      return { ...base, ...at(path), message: `must list at least ${String(params.limit)} item(s)`, hint: description ?? "add at least one entry" };
     case "uniqueItems":
       return {
         ...base,
@@ -101,9 +107,9 @@ function describe(error: ErrorObject, source: YamlSource): InputProblem {
       };
     case "minProperties":
     case "maxProperties":
-      return { ...base, ...at(path), message: `has the wrong number of fields`, hint: description };
+      return { ...base, ...at(path), message: `has the wrong number of fields`, hint: description ?? "check which fields this entry needs" };
     default:
-      return { ...base, ...at(path), message: error.message ?? "is not valid", hint: description };
+      return { ...base, ...at(path), message: error.message ?? "is not valid", hint: description ?? "see the schema in averta's schema folder" };
   }
 }
 

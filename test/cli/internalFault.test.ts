@@ -15,7 +15,7 @@ describe("an internal fault", () => {
     const code = await runCli(["plan", "scenarios/demo.yaml"], io);
     expect(code).toBe(1);
     expect(io.out).toBe("");
-    expect(io.err).toMatch(/^internal error: cannot read alternatives of undefined\n/);
+    expect(io.err).toMatch(/^internal error: cannot read alternatives of undefined\n/m);
     expect(io.err).not.toMatch(/^\s+at /m);
   });
 });

@@ -16,6 +16,11 @@ const FOLDER = "test/fixtures/bad";
 const COMMANDS: readonly { readonly name: string; readonly argv: (file: string, out: string) => string[] }[] = [
   { name: "check", argv: (file) => ["check", file] },
   { name: "plan", argv: (file, out) => ["plan", file, "--out", out] },
+  { name: "frontier", argv: (file, out) => ["frontier", file, "--steps", "2", "--out", out] },
+  { name: "compare", argv: (file, out) => ["compare", file, "--budget", "1M", "--budget", "2M", "--out", out] },
+  { name: "uncertainty", argv: (file, out) => ["uncertainty", file, "--draws", "2", "--threads", "1", "--out", out] },
+  { name: "report", argv: (file, out) => ["report", file, "--steps", "2", "--out", out] },
+  { name: "screen", argv: (file, out) => ["screen", file, "--out", out] },
 ];
 
 interface Case {

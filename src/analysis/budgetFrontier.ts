@@ -12,7 +12,8 @@ export interface FrontierLevel {
 export function budgetLevels(from: number, to: number, steps: number): number[] {
   if (!(steps >= 1) || !Number.isInteger(steps)) throw new RangeError(`steps must be a whole number >= 1, got ${steps}`);
   if (!(to >= from)) throw new RangeError(`budget range must rise: from ${from} to ${to}`);
-  return Array.from({ length: steps + 1 }, (_, index) => (index === steps ? to : from + ((to - from) * index) / steps));
+  // Whole currency units: a level of 4,820,766.67 reads as noise in a finance table.
+  return Array.from({ length: steps + 1 }, (_, index) => (index === steps ? to : Math.round(from + ((to - from) * index) / steps)));
 }
 
 /** Solves the prepared scenario to optimality at each budget level, in the order given. */

@@ -8,7 +8,7 @@ import { randomProgramme } from "./randomProgramme.js";
 // Reference: exhaustive enumeration (bruteForceOptimum), a method independent of every engine.
 // Costs and values are whole numbers, so optima are compared exactly.
 const CASES = 240;
-const ENGINES: readonly EngineName[] = ["auto", "lp-solver"];
+const ENGINES: readonly EngineName[] = ["auto", "exact", "highs", "lp-solver"];
 
 describe("solveProgramme against brute-force enumeration", () => {
   for (const engine of ENGINES) {

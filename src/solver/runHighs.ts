@@ -18,6 +18,8 @@ export interface HighsRunSettings {
   readonly relativeGap: number;
   /** mip_abs_gap, in objective units. */
   readonly absoluteGap: number;
+  /** A feasible 0-1 point to start the MIP search from (one value per column). */
+  readonly start?: Float64Array;
 }
 
 /**
@@ -34,6 +36,7 @@ export function runHighs(highs: Highs, data: ModelData, settings: HighsRunSettin
       mip_abs_gap: settings.absoluteGap,
       time_limit: Math.max(0.001, settings.timeLimitSeconds),
     });
+    if (settings.start !== undefined) model.setSolution({ colValue: settings.start });
     const { modelStatus } = model.run();
     const codes = highs.constants.modelStatus;
     const integer = data.integrality !== undefined;

@@ -3,6 +3,7 @@ import { buildGroupHull } from "./buildGroupHull.js";
 import { canonicalGroupOrder } from "./canonicalGroupOrder.js";
 import { diagnoseInfeasibility } from "./diagnoseInfeasibility.js";
 import { loadHighs } from "./loadHighs.js";
+import { reorderProgramme } from "./reorderProgramme.js";
 import { solveSingleBudget } from "./solveSingleBudget.js";
 import { solveWithHighs } from "./solveWithHighs.js";
 import { solveWithLpSolver } from "./solveWithLpSolver.js";
@@ -70,7 +71,14 @@ export function prepareProgramme(programme: Programme, options: Partial<SolveOpt
     if (engine === "exact" && target.constraints.length === 0) return solveSingleBudget(layoutFor(values), target.budget, settings);
     try {
       const highs = await loadHighs();
-      return engine === "exact" ? solveWithSideConstraints(highs, target, settings) : solveWithHighs(highs, target, settings);
+      const ordered = reorderProgramme(target, canonical);
+      const result =
+        engine === "exact" ? solveWithSideConstraints(highs, ordered, settings) : solveWithHighs(highs, ordered, settings);
+      const choice: (number | null)[] = new Array<number | null>(target.groups.length).fill(null);
+      canonical.forEach((g, k) => {
+        choice[g] = result.choice[k] ?? null;
+      });
+      return { ...result, choice };
     } catch (error) {
       // A WebAssembly fault (e.g. out of memory) is an engine outcome, not a programmer error.
       const detail = error instanceof Error ? error.message : String(error);

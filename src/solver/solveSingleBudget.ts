@@ -17,7 +17,8 @@ export const OPTIMALITY_TOLERANCE = 1e-10;
  * 2. A greedy incumbent: the rounded-down LP filled with every later segment that still fits.
  * 3. Reduced-cost fixing: an option whose reduced value falls more than U - incumbent below its
  *    group's best cannot be in any better programme; most groups keep a single option.
- * 4. Branch-and-bound (`branchAndBoundCore`) over the few groups left (the core).
+ * 4. Branch-and-bound (`branchAndBoundCore`) over the few groups left (the core), first at a
+ *    32x tighter threshold for a quick better incumbent, then widening until the proof holds.
  * Returns `optimal` only when the search finished; the bound is then within the tolerance.
  */
 export function solveSingleBudget(layout: BudgetLayout, budget: number, settings: Required<SolveOptions>): EngineResult {
@@ -68,7 +69,7 @@ export function solveSingleBudget(layout: BudgetLayout, budget: number, settings
     incumbentValue += layout.segmentValue[s]!;
     level[k] += 1;
   }
-  const incumbent = Int32Array.from(level, (p, k) => hulls[k]!.vertices[p]!);
+  const incumbent: Int32Array = Int32Array.from(level, (p, k) => hulls[k]!.vertices[p]!);
 
   // 3. Lagrangian bound and reduced-cost fixing.
   const best = new Float64Array(n);
@@ -85,19 +86,67 @@ export function solveSingleBudget(layout: BudgetLayout, budget: number, settings
     for (let k = 0; k < n; k += 1) setChoice(k, incumbent[k]!);
     return { status: "optimal", choice, bound: Math.max(upper, incumbentValue), budgetMarginalValue: lambda };
   }
-  const threshold = upper - incumbentValue + tolerance;
+  // 4. Exact search over the core. A first pass uses a tighter threshold than the incumbent
+  // allows (a much smaller core); its better incumbent then narrows the next, wider pass. A pass
+  // whose optimum z meets U - z <= threshold is a proof, since every dropped option caps its
+  // programmes below U - threshold.
+  const deadline = started + settings.timeLimitSeconds * 1000;
+  let incumbentChoice: Int32Array = incumbent;
+  let threshold = Math.max(tolerance, (upper - incumbentValue) / FIRST_PASS_DIVISOR);
+  for (;;) {
+    const pass = searchRestricted(layout, budget, lambda, best, incumbentChoice, threshold, tolerance, deadline);
+    incumbentChoice = pass.choice;
+    incumbentValue = pass.value;
+    if (!pass.proven) {
+      for (let k = 0; k < n; k += 1) setChoice(k, incumbentChoice[k]!);
+      return { status: "time-limit", choice, bound: upper, budgetMarginalValue: lambda };
+    }
+    if (upper - incumbentValue <= threshold) {
+      for (let k = 0; k < n; k += 1) setChoice(k, incumbentChoice[k]!);
+      return { status: "optimal", choice, bound: Math.max(incumbentValue, pass.bound), budgetMarginalValue: lambda };
+    }
+    threshold = Math.min(upper - incumbentValue + tolerance, threshold * 4);
+  }
+}
+
+/** How much tighter than the incumbent allows the first pass's threshold is. */
+const FIRST_PASS_DIVISOR = 32;
+
+interface PassResult {
+  /** Option per canonical group (NO_OPTION for none). */
+  readonly choice: Int32Array;
+  readonly value: number;
+  readonly proven: boolean;
+  /** Proven upper bound within the restriction. */
+  readonly bound: number;
+}
+
+// Reduced-cost fixing at `threshold`, then branch-and-bound over the groups left with a choice.
+function searchRestricted(
+  layout: BudgetLayout,
+  budget: number,
+  lambda: number,
+  best: Float64Array,
+  incumbent: Int32Array,
+  threshold: number,
+  tolerance: number,
+  deadline: number,
+): PassResult {
+  const { canonical, hulls, costs, values } = layout;
+  const cost = (g: number, a: number): number => (a < 0 ? 0 : costs[g]![a]!);
+  const value = (g: number, a: number): number => (a < 0 ? 0 : values[g]![a]!);
+  const choice = Int32Array.from(incumbent);
   const coreGroups: number[] = [];
   const coreCandidates: number[][] = [];
   let fixedCost = 0;
   let fixedValue = 0;
-  for (let k = 0; k < n; k += 1) {
+  for (let k = 0; k < canonical.length; k += 1) {
     const g = canonical[k]!;
-    // The incumbent's own option always stays, whatever rounding does to its reduced value.
+    // The incumbent's own option always stays, so the restriction always contains it.
     const kept = hulls[k]!.undominated.filter(
       (a) => a === incumbent[k] || best[k]! - (value(g, a) - lambda * cost(g, a)) <= threshold,
     );
     if (kept.length === 1) {
-      setChoice(k, kept[0]!);
       fixedCost += cost(g, kept[0]!);
       fixedValue += value(g, kept[0]!);
     } else {
@@ -105,8 +154,6 @@ export function solveSingleBudget(layout: BudgetLayout, budget: number, settings
       coreCandidates.push(kept);
     }
   }
-
-  // 4. Exact search over the core, starting from the incumbent's choices there.
   let incumbentCoreValue = 0;
   const coreIncumbent = Int32Array.from(coreGroups, (k, i) => {
     const a = incumbent[k]!;
@@ -120,14 +167,15 @@ export function solveSingleBudget(layout: BudgetLayout, budget: number, settings
     incumbent: coreIncumbent,
     incumbentValue: incumbentCoreValue,
     tolerance,
-    deadline: started + settings.timeLimitSeconds * 1000,
+    deadline,
   });
-  coreGroups.forEach((k, i) => setChoice(k, coreCandidates[i]![core.choice[i]!]!));
-  const objective = fixedValue + core.value;
+  coreGroups.forEach((k, i) => {
+    choice[k] = coreCandidates[i]![core.choice[i]!]!;
+  });
   return {
-    status: core.proven ? "optimal" : "time-limit",
     choice,
-    bound: core.proven ? Math.max(objective, fixedValue + core.prunedBound) : upper,
-    budgetMarginalValue: lambda,
+    value: fixedValue + core.value,
+    proven: core.proven,
+    bound: fixedValue + core.prunedBound,
   };
 }

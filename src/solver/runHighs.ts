@@ -46,6 +46,10 @@ export function runHighs(highs: Highs, data: ModelData, settings: HighsRunSettin
     const rowDual = !integer && solution !== undefined ? solution.rowDual : new Float64Array(0);
     const bound = integer ? Number(model.info.get("mip_dual_bound")) : hasPoint ? model.getObjectiveValue() : Number.NaN;
     if (modelStatus === codes.optimal) return { status: "optimal", colValue, rowDual, bound, detail: "optimal" };
+    // A model without columns (no site has options) is solved by choosing nothing.
+    if (modelStatus === codes.empty && data.numCols === 0) {
+      return { status: "optimal", colValue: new Float64Array(0), rowDual: new Float64Array(data.numRows), bound: 0, detail: "empty" };
+    }
     if (modelStatus === codes.infeasible || modelStatus === codes.unboundedOrInfeasible) {
       return { status: "infeasible", colValue: new Float64Array(0), rowDual, bound: Number.NaN, detail: "infeasible" };
     }

@@ -32,7 +32,7 @@ export function solveWithHighs(highs: Highs, programme: Programme, settings: Req
   if (run.status === "infeasible") {
     return { status: "infeasible", choice: none, bound: Number.NaN, budgetMarginalValue };
   }
-  const choice = run.colValue.length > 0 ? readHighsChoice(model, run.colValue, programme.groups.length) : undefined;
+  const choice = readHighsChoice(model, run.colValue, programme.groups.length);
   if (choice === undefined || run.status === "failed") {
     return {
       status: "not-solved",

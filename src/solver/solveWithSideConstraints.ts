@@ -84,7 +84,7 @@ export function solveWithSideConstraints(highs: Highs, programme: Programme, set
       absoluteGap: tolerance,
       ...(incumbent === undefined ? {} : { start: startingPoint(model, incumbent.choice) }),
     });
-    const choice = run.colValue.length > 0 ? readHighsChoice(model, run.colValue, groups.length) : undefined;
+    const choice = readHighsChoice(model, run.colValue, groups.length);
     let verified = false;
     if (choice !== undefined && run.status !== "failed") {
       const check = checkSolution(programme, choice);

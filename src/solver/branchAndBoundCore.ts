@@ -38,7 +38,7 @@ export function branchAndBoundCore(problem: CoreProblem): CoreResult {
   const groups = problem.candidateCosts.length;
   const costs = problem.candidateCosts;
   const values = problem.candidateValues;
-  const hulls = costs.map((c, k) => hullNumbers(c, values[k]!, true));
+  const hulls = costs.map((c, k) => hullNumbers(Array.from(c, (cost, a) => ({ cost, value: values[k]![a]! })), true));
   // Candidates worth branching on: dominated ones never help under a single budget.
   const branchable = hulls.map((h) => h.undominated);
 

@@ -1,4 +1,5 @@
 import { hullNumbers, type HullNumbers } from "./buildGroupHull.js";
+import type { ProgrammeGroup } from "./types.js";
 
 /**
  * Everything the single-budget engine needs that does not depend on the budget level: each
@@ -8,9 +9,8 @@ import { hullNumbers, type HullNumbers } from "./buildGroupHull.js";
 export interface BudgetLayout {
   /** Canonical position -> input group index (groups sorted by id, then input index). */
   readonly canonical: Int32Array;
-  /** Option costs and values per input group. */
-  readonly costs: readonly (readonly number[])[];
-  readonly values: readonly (readonly number[])[];
+  /** The groups (input order) whose option costs and values the layout was built from. */
+  readonly groups: readonly ProgrammeGroup[];
   /** Hull per canonical position. */
   readonly hulls: readonly HullNumbers[];
   /** Sum of each group's cheapest hull vertex (doing nothing for optional groups). */
@@ -30,12 +30,7 @@ export interface BudgetLayout {
  * (ties broken by group position in id order, so the result does not depend on input order).
  * Cost O(N m log m + S log S) for N groups of m options and S segments.
  */
-export function buildBudgetLayout(
-  canonical: Int32Array,
-  costs: readonly (readonly number[])[],
-  values: readonly (readonly number[])[],
-  required: readonly boolean[],
-): BudgetLayout {
+export function buildBudgetLayout(canonical: Int32Array, groups: readonly ProgrammeGroup[]): BudgetLayout {
   const n = canonical.length;
   const hulls: HullNumbers[] = new Array<HullNumbers>(n);
   let baseCost = 0;
@@ -43,12 +38,12 @@ export function buildBudgetLayout(
   let segmentCount = 0;
   for (let k = 0; k < n; k += 1) {
     const g = canonical[k]!;
-    const hull = hullNumbers(costs[g]!, values[g]!, required[g]!);
+    const hull = hullNumbers(groups[g]!.options, groups[g]!.required);
     hulls[k] = hull;
     const first = hull.vertices[0];
     if (first !== undefined && first >= 0) {
-      baseCost += costs[g]![first]!;
-      baseValue += values[g]![first]!;
+      baseCost += groups[g]!.options[first]!.cost;
+      baseValue += groups[g]!.options[first]!.value;
     }
     segmentCount += Math.max(0, hull.vertices.length - 1);
   }
@@ -61,8 +56,9 @@ export function buildBudgetLayout(
   for (let k = 0; k < n; k += 1) {
     const g = canonical[k]!;
     const vertices = hulls[k]!.vertices;
-    const c = (a: number): number => (a < 0 ? 0 : costs[g]![a]!);
-    const v = (a: number): number => (a < 0 ? 0 : values[g]![a]!);
+    const options = groups[g]!.options;
+    const c = (a: number): number => (a < 0 ? 0 : options[a]!.cost);
+    const v = (a: number): number => (a < 0 ? 0 : options[a]!.value);
     for (let p = 0; p + 1 < vertices.length; p += 1) {
       group[s] = k;
       from[s] = p;
@@ -78,8 +74,7 @@ export function buildBudgetLayout(
   order.sort((x, y) => ratio[y]! - ratio[x]! || group[x]! - group[y]! || from[x]! - from[y]!);
   return {
     canonical,
-    costs,
-    values,
+    groups,
     hulls,
     baseCost,
     baseValue,

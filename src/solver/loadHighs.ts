@@ -10,6 +10,9 @@ let loading: Promise<Highs> | undefined;
  * module, about a tenth of a second); every model created from it must be disposed.
  */
 export function loadHighs(): Promise<Highs> {
-  loading ??= highsLoader();
+  loading ??= highsLoader().catch((error: unknown) => {
+    loading = undefined; // let a later call try again
+    throw error;
+  });
   return loading;
 }

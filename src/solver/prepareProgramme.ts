@@ -16,6 +16,7 @@ import {
   type EngineResult,
   type GroupHull,
   type Programme,
+  type ProgrammeGroup,
   type SideConstraint,
   type Solution,
   type SolveOptions,
@@ -51,24 +52,35 @@ export function prepareProgramme(programme: Programme, options: Partial<SolveOpt
   validateProgramme(programme);
   const settings: Required<SolveOptions> = { ...DEFAULT_SOLVE_OPTIONS, ...options };
   const canonical = canonicalGroupOrder(programme.groups);
-  const costs = programme.groups.map((group) => group.options.map((o) => o.cost));
-  const baseValues = programme.groups.map((group) => group.options.map((o) => o.value));
-  const required = programme.groups.map((group) => group.required);
-  const layouts = new Map<readonly (readonly number[])[], BudgetLayout>();
-  const layoutFor = (values: readonly (readonly number[])[]): BudgetLayout => {
-    let layout = layouts.get(values);
+  const layouts = new Map<readonly ProgrammeGroup[], BudgetLayout>();
+  const layoutFor = (groups: readonly ProgrammeGroup[]): BudgetLayout => {
+    let layout = layouts.get(groups);
     if (layout === undefined) {
       // Keep the base layout and the latest draw only: draws are usually used once.
-      for (const key of layouts.keys()) if (key !== baseValues) layouts.delete(key);
-      layout = buildBudgetLayout(canonical, costs, values, required);
-      layouts.set(values, layout);
+      for (const key of layouts.keys()) if (key !== programme.groups) layouts.delete(key);
+      layout = buildBudgetLayout(canonical, groups);
+      layouts.set(groups, layout);
     }
     return layout;
   };
 
-  const runEngine = async (engine: ConcreteEngine, target: Programme, values: readonly (readonly number[])[]): Promise<EngineResult> => {
+  // The groups carrying one set of drawn values, kept while the caller re-uses that array.
+  let drawn: { values: readonly (readonly number[])[]; groups: readonly ProgrammeGroup[] } | undefined;
+  const groupsWithValues = (values: readonly (readonly number[])[] | undefined): readonly ProgrammeGroup[] => {
+    if (values === undefined) return programme.groups;
+    if (drawn?.values !== values) {
+      const groups = programme.groups.map((group, g) => ({
+        ...group,
+        options: group.options.map((option, a) => ({ cost: option.cost, value: values[g]?.[a] ?? Number.NaN })),
+      }));
+      drawn = { values, groups };
+    }
+    return drawn.groups;
+  };
+
+  const runEngine = async (engine: ConcreteEngine, target: Programme): Promise<EngineResult> => {
     if (engine === "lp-solver") return solveWithLpSolver(target, settings);
-    if (engine === "exact" && target.constraints.length === 0) return solveSingleBudget(layoutFor(values), target.budget, settings);
+    if (engine === "exact" && target.constraints.length === 0) return solveSingleBudget(layoutFor(target.groups), target.budget, settings);
     try {
       const highs = await loadHighs();
       const ordered = reorderProgramme(target, canonical);
@@ -87,16 +99,9 @@ export function prepareProgramme(programme: Programme, options: Partial<SolveOpt
   };
 
   const solve = async (change: ProgrammeChange = {}): Promise<Solution> => {
-    const values = change.values ?? baseValues;
     const target: Programme = {
       budget: change.budget ?? programme.budget,
-      groups:
-        change.values === undefined
-          ? programme.groups
-          : programme.groups.map((group, g) => ({
-              ...group,
-              options: group.options.map((option, a) => ({ cost: option.cost, value: values[g]?.[a] ?? Number.NaN })),
-            })),
+      groups: groupsWithValues(change.values),
       constraints: change.constraints ?? programme.constraints,
     };
     if (change.values !== undefined || change.constraints !== undefined || change.budget !== undefined) {
@@ -112,7 +117,7 @@ export function prepareProgramme(programme: Programme, options: Partial<SolveOpt
     if (reason !== undefined) return emptySolution(target, engines[0]!, "infeasible", reason);
     let last: Solution | undefined;
     for (const engine of engines) {
-      last = verifyEngineResult(target, engine, await runEngine(engine, target, values));
+      last = verifyEngineResult(target, engine, await runEngine(engine, target));
       if (last.status !== "not-solved") return last;
     }
     return last!;

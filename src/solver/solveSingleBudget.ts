@@ -1,5 +1,6 @@
 import { branchAndBoundCore } from "./branchAndBoundCore.js";
 import type { BudgetLayout } from "./buildBudgetLayout.js";
+import { NO_OPTION } from "./buildGroupHull.js";
 import type { EngineResult, SolveOptions } from "./types.js";
 
 /**
@@ -21,17 +22,20 @@ export const OPTIMALITY_TOLERANCE = 1e-10;
  *    32x tighter threshold for a quick better incumbent, then widening until the proof holds.
  * Returns `optimal` only when the search finished; the bound is then within the tolerance.
  */
-export function solveSingleBudget(layout: BudgetLayout, budget: number, settings: Required<SolveOptions>): EngineResult {
+export function solveSingleBudget(layout: BudgetLayout, statedBudget: number, settings: Required<SolveOptions>): EngineResult {
+  // Sums of costs in a different order can differ in the last bits; without this allowance a
+  // programme that spends the budget exactly could be rejected. checkSolution allows 1e-9.
+  const budget = statedBudget + BUDGET_ROUNDING_ALLOWANCE * Math.max(1, statedBudget);
   const started = Date.now();
-  const { canonical, hulls, costs, values } = layout;
+  const { canonical, hulls, groups } = layout;
   const n = canonical.length;
   const choice: (number | null)[] = new Array<number | null>(n).fill(null);
   const remaining0 = budget - layout.baseCost;
   if (remaining0 < 0) {
     return { status: "infeasible", choice, bound: Number.NaN, budgetMarginalValue: Number.NaN };
   }
-  const cost = (g: number, a: number): number => (a < 0 ? 0 : costs[g]![a]!);
-  const value = (g: number, a: number): number => (a < 0 ? 0 : values[g]![a]!);
+  const cost = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.cost);
+  const value = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.value);
 
   // 1. LP relaxation.
   const level = new Int32Array(n);
@@ -71,15 +75,32 @@ export function solveSingleBudget(layout: BudgetLayout, budget: number, settings
   }
   const incumbent: Int32Array = Int32Array.from(level, (p, k) => hulls[k]!.vertices[p]!);
 
-  // 3. Lagrangian bound and reduced-cost fixing.
-  const best = new Float64Array(n);
+  // 3. Lagrangian bound; per group its best option at lambda and how far the runner-up falls short.
+  const reduced: ReducedValues = {
+    best: new Float64Array(n),
+    bestOption: new Int32Array(n),
+    secondGap: new Float64Array(n),
+  };
   let upper = lambda * budget;
   for (let k = 0; k < n; k += 1) {
     const g = canonical[k]!;
-    let h = Number.NEGATIVE_INFINITY;
-    for (const a of hulls[k]!.undominated) h = Math.max(h, value(g, a) - lambda * cost(g, a));
-    best[k] = h;
-    upper += h;
+    let first = Number.NEGATIVE_INFINITY;
+    let second = Number.NEGATIVE_INFINITY;
+    let firstOption = NO_OPTION;
+    for (const a of hulls[k]!.undominated) {
+      const r = value(g, a) - lambda * cost(g, a);
+      if (r > first) {
+        second = first;
+        first = r;
+        firstOption = a;
+      } else if (r > second) {
+        second = r;
+      }
+    }
+    reduced.best[k] = first;
+    reduced.bestOption[k] = firstOption;
+    reduced.secondGap[k] = first - second;
+    upper += first;
   }
   const tolerance = Math.max(OPTIMALITY_TOLERANCE, settings.relativeGap) * Math.max(1, Math.abs(upper));
   if (upper - incumbentValue <= tolerance) {
@@ -94,7 +115,7 @@ export function solveSingleBudget(layout: BudgetLayout, budget: number, settings
   let incumbentChoice: Int32Array = incumbent;
   let threshold = Math.max(tolerance, (upper - incumbentValue) / FIRST_PASS_DIVISOR);
   for (;;) {
-    const pass = searchRestricted(layout, budget, lambda, best, incumbentChoice, threshold, tolerance, deadline);
+    const pass = searchRestricted(layout, budget, lambda, reduced, incumbentChoice, threshold, tolerance, deadline);
     incumbentChoice = pass.choice;
     incumbentValue = pass.value;
     if (!pass.proven) {
@@ -109,6 +130,9 @@ export function solveSingleBudget(layout: BudgetLayout, budget: number, settings
   }
 }
 
+/** Relative allowance on the budget for floating-point rounding in sums of costs. */
+const BUDGET_ROUNDING_ALLOWANCE = 1e-11;
+
 /** How much tighter than the incumbent allows the first pass's threshold is. */
 const FIRST_PASS_DIVISOR = 32;
 
@@ -121,20 +145,29 @@ interface PassResult {
   readonly bound: number;
 }
 
+/** Per canonical group at lambda: best reduced value, the option giving it, and the runner-up's shortfall. */
+interface ReducedValues {
+  readonly best: Float64Array;
+  readonly bestOption: Int32Array;
+  readonly secondGap: Float64Array;
+}
+
 // Reduced-cost fixing at `threshold`, then branch-and-bound over the groups left with a choice.
+// A group keeps its options within `threshold` of its best, plus the incumbent's; it is fixed
+// when that leaves one, i.e. the incumbent holds its best option and the runner-up falls short.
 function searchRestricted(
   layout: BudgetLayout,
   budget: number,
   lambda: number,
-  best: Float64Array,
+  reduced: ReducedValues,
   incumbent: Int32Array,
   threshold: number,
   tolerance: number,
   deadline: number,
 ): PassResult {
-  const { canonical, hulls, costs, values } = layout;
-  const cost = (g: number, a: number): number => (a < 0 ? 0 : costs[g]![a]!);
-  const value = (g: number, a: number): number => (a < 0 ? 0 : values[g]![a]!);
+  const { canonical, hulls, groups } = layout;
+  const cost = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.cost);
+  const value = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.value);
   const choice = Int32Array.from(incumbent);
   const coreGroups: number[] = [];
   const coreCandidates: number[][] = [];
@@ -142,17 +175,16 @@ function searchRestricted(
   let fixedValue = 0;
   for (let k = 0; k < canonical.length; k += 1) {
     const g = canonical[k]!;
-    // The incumbent's own option always stays, so the restriction always contains it.
-    const kept = hulls[k]!.undominated.filter(
-      (a) => a === incumbent[k] || best[k]! - (value(g, a) - lambda * cost(g, a)) <= threshold,
-    );
-    if (kept.length === 1) {
-      fixedCost += cost(g, kept[0]!);
-      fixedValue += value(g, kept[0]!);
-    } else {
-      coreGroups.push(k);
-      coreCandidates.push(kept);
+    const held = incumbent[k]!;
+    if (held === reduced.bestOption[k] && reduced.secondGap[k]! > threshold) {
+      fixedCost += cost(g, held);
+      fixedValue += value(g, held);
+      continue;
     }
+    coreGroups.push(k);
+    coreCandidates.push(
+      hulls[k]!.undominated.filter((a) => a === held || reduced.best[k]! - (value(g, a) - lambda * cost(g, a)) <= threshold),
+    );
   }
   let incumbentCoreValue = 0;
   const coreIncumbent = Int32Array.from(coreGroups, (k, i) => {

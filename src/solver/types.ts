@@ -73,11 +73,15 @@ export interface Solution {
   readonly choice: readonly (number | null)[];
   readonly objective: number;
   readonly cost: number;
-  /** Upper bound on the optimum (LP relaxation or better). */
+  /** Upper bound on the optimum (LP relaxation or better); NaN when none is known. */
   readonly bound: number;
-  /** (bound - objective) / max(1, |bound|). */
+  /** (bound - objective) / max(1, |bound|); NaN when the bound is unknown. */
   readonly gap: number;
-  /** Objective gained per extra currency unit of budget at the LP optimum (0 if the budget is slack). */
+  /**
+   * Objective gained per extra currency unit of budget at the LP optimum (0 if the budget is
+   * slack): the ratio of the critical hull segment, or the budget row's LP dual when there are
+   * side constraints. NaN when unknown (lp-solver engine, or no programme exists).
+   */
   readonly budgetMarginalValue: number;
   readonly engine: Exclude<EngineName, "auto">;
   /** Why the model is infeasible, in plain words, when it is. */

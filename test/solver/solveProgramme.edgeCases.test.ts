@@ -48,4 +48,15 @@ describe.each(ENGINES)("edge cases, engine %s", (engine) => {
     const solution = await solveProgramme(programme, { engine });
     expect(solution).toMatchObject({ status: "optimal", objective: 6, choice: [1] });
   });
+
+  it("spends a budget exactly even when the sum of decimal costs rounds above it", async () => {
+    // In binary floating point 0.1 + 0.2 + 0.3 = 0.6000000000000001 > 0.6 (IEEE 754 double).
+    const programme: Programme = {
+      budget: 0.6,
+      groups: [0.1, 0.2, 0.3].map((cost, g) => ({ id: `s${g}`, required: false, options: [{ cost, value: 1 }] })),
+      constraints: [],
+    };
+    const solution = await solveProgramme(programme, { engine });
+    expect(solution).toMatchObject({ status: "optimal", objective: 3, choice: [0, 0, 0] });
+  });
 });

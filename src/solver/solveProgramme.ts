@@ -3,7 +3,8 @@ import type { Programme, Solution, SolveOptions } from "./types.js";
 
 /**
  * Solves a programme: the one entry point for a single solve. `engine: "auto"` (default) uses
- * the dedicated exact engine (hull + branch-and-bound for a single budget; Lagrangian reduction
+ * the dedicated exact engine (hulls, LP bound, reduced-cost fixing and dynamic programming over
+ * the small core left, for a single budget; Lagrangian reduction
  * with HiGHS on the reduced model when there are side constraints) and falls back to the general
  * engines if an answer fails verification. Every answer is checked by `checkSolution` before it
  * is returned and is never reported as optimal unless proven. Outcomes are statuses; only

@@ -1,4 +1,4 @@
-import { branchAndBoundCore } from "./branchAndBoundCore.js";
+import { dynamicProgrammeCore } from "./dynamicProgrammeCore.js";
 import type { BudgetLayout } from "./buildBudgetLayout.js";
 import { NO_OPTION } from "./buildGroupHull.js";
 import type { EngineResult, SolveOptions } from "./types.js";
@@ -18,7 +18,7 @@ export const OPTIMALITY_TOLERANCE = 1e-10;
  * 2. A greedy incumbent: the rounded-down LP filled with every later segment that still fits.
  * 3. Reduced-cost fixing: an option whose reduced value falls more than U - incumbent below its
  *    group's best cannot be in any better programme; most groups keep a single option.
- * 4. Branch-and-bound (`branchAndBoundCore`) over the few groups left (the core), first at a
+ * 4. An exact search (`dynamicProgrammeCore`) over the few groups left (the core), first at a
  *    32x tighter threshold for a quick better incumbent, then widening until the proof holds.
  * Returns `optimal` only when the search finished; the bound is then within the tolerance.
  */
@@ -152,7 +152,7 @@ interface ReducedValues {
   readonly secondGap: Float64Array;
 }
 
-// Reduced-cost fixing at `threshold`, then branch-and-bound over the groups left with a choice.
+// Reduced-cost fixing at `threshold`, then the exact core search over the groups left with a choice.
 // A group keeps its options within `threshold` of its best, plus the incumbent's; it is fixed
 // when that leaves one, i.e. the incumbent holds its best option and the runner-up falls short.
 function searchRestricted(
@@ -192,7 +192,7 @@ function searchRestricted(
     incumbentCoreValue += value(canonical[k]!, a);
     return coreCandidates[i]!.indexOf(a);
   });
-  const core = branchAndBoundCore({
+  const core = dynamicProgrammeCore({
     candidateCosts: coreGroups.map((k, i) => Float64Array.from(coreCandidates[i]!, (a) => cost(canonical[k]!, a))),
     candidateValues: coreGroups.map((k, i) => Float64Array.from(coreCandidates[i]!, (a) => value(canonical[k]!, a))),
     budget: budget - fixedCost,

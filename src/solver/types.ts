@@ -73,11 +73,15 @@ export interface Solution {
   readonly choice: readonly (number | null)[];
   readonly objective: number;
   readonly cost: number;
-  /** Upper bound on the optimum (LP relaxation or better). */
+  /** Upper bound on the optimum (LP relaxation or better); NaN when none is known. */
   readonly bound: number;
-  /** (bound - objective) / max(1, |bound|). */
+  /** (bound - objective) / max(1, |bound|); NaN when the bound is unknown. */
   readonly gap: number;
-  /** Objective gained per extra currency unit of budget at the LP optimum (0 if the budget is slack). */
+  /**
+   * Objective gained per extra currency unit of budget at the LP optimum (0 if the budget is
+   * slack): the ratio of the critical hull segment, or the budget row's LP dual when there are
+   * side constraints. NaN when unknown (lp-solver engine, or no programme exists).
+   */
   readonly budgetMarginalValue: number;
   readonly engine: Exclude<EngineName, "auto">;
   /** Why the model is infeasible, in plain words, when it is. */
@@ -96,4 +100,30 @@ export interface EngineResult {
   readonly bound: number;
   readonly budgetMarginalValue: number;
   readonly diagnosis?: string;
+}
+
+/** Why an option cannot sit on its site's cost-value hull. */
+export interface RemovedOption {
+  /** Option index within its group. */
+  readonly option: number;
+  /**
+   * `dominated`: another option (or doing nothing) costs no more and gives at least as much;
+   * it is never needed under a single budget. `lp-dominated`: it lies on or below the straight
+   * line between two hull neighbours; the budget-only LP never picks it, though an integer
+   * optimum still may.
+   */
+  readonly reason: "dominated" | "lp-dominated";
+  /** For `dominated`: the better option, or null for doing nothing. For `lp-dominated`: the cheaper neighbour. */
+  readonly by: number | null;
+  /** For `lp-dominated`: the dearer neighbour. */
+  readonly and?: number | null;
+  /** Plain words, e.g. "dominated by option 2: costs more, avoids less". */
+  readonly explanation: string;
+}
+
+/** A site's upper convex hull of (cost, value): the options a budget-only LP would ever pick. */
+export interface GroupHull {
+  /** Hull vertices in increasing cost: option indices, null for doing nothing. */
+  readonly vertices: readonly (number | null)[];
+  readonly removed: readonly RemovedOption[];
 }

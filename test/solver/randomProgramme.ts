@@ -24,6 +24,8 @@ export interface RandomProgrammeShape {
   readonly sideConstraints: boolean;
   /** Largest cost; costs and values are whole numbers so that sums are exact in floating point. */
   readonly maxCost: number;
+  /** Multiplies values before rounding: larger means fewer exact ties between programmes. */
+  readonly valueScale: number;
 }
 
 const DEFAULT_SHAPE: RandomProgrammeShape = {
@@ -34,6 +36,7 @@ const DEFAULT_SHAPE: RandomProgrammeShape = {
   requiredChance: 0.1,
   sideConstraints: false,
   maxCost: 100,
+  valueScale: 1,
 };
 
 /**
@@ -56,7 +59,7 @@ export function randomProgramme(seed: number, shape: Partial<RandomProgrammeShap
     let dearest = 0;
     for (let a = 0; a < count; a += 1) {
       const cost = random() < 0.05 ? 0 : int(1, s.maxCost);
-      const value = random() < 0.05 ? 0 : Math.max(0, Math.round(scale * 10 * Math.sqrt(cost) * (0.7 + 0.6 * random())));
+      const value = random() < 0.05 ? 0 : Math.max(0, Math.round(s.valueScale * scale * 10 * Math.sqrt(cost) * (0.7 + 0.6 * random())));
       options.push({ cost, value });
       dearest = Math.max(dearest, cost);
     }

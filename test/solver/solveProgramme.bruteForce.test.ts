@@ -8,7 +8,7 @@ import { randomProgramme } from "./randomProgramme.js";
 // Reference: exhaustive enumeration (bruteForceOptimum), a method independent of every engine.
 // Costs and values are whole numbers, so optima are compared exactly.
 const CASES = 240;
-const ENGINES: readonly EngineName[] = ["auto", "lp-solver"];
+const ENGINES: readonly EngineName[] = ["auto", "exact", "highs", "lp-solver"];
 
 describe("solveProgramme against brute-force enumeration", () => {
   for (const engine of ENGINES) {
@@ -27,7 +27,10 @@ describe("solveProgramme against brute-force enumeration", () => {
         const solution = await solveProgramme(programme, { engine });
         if (reference.objective === null) {
           infeasible += 1;
-          expect(solution.status, `seed ${seed}`).not.toBe("optimal");
+          // javascript-lp-solver cannot prove infeasibility (only the up-front diagnosis can); the others must.
+          const allowed = engine === "lp-solver" ? ["infeasible", "not-solved"] : ["infeasible"];
+          expect(allowed, `seed ${seed}`).toContain(solution.status);
+          expect(solution.choice.every((a) => a === null), `seed ${seed}`).toBe(true);
         } else {
           expect(solution.status, `seed ${seed}`).toBe("optimal");
           expect(checkSolution(programme, solution.choice).feasible, `seed ${seed}`).toBe(true);
@@ -42,4 +45,30 @@ describe("solveProgramme against brute-force enumeration", () => {
       expect(infeasible).toBeLessThan(CASES / 2);
     });
   }
+
+  it("exact engine: 200 programmes with fractional values and many zero costs and values", async () => {
+    let ran = 0;
+    for (let seed = 5001; seed <= 5200; seed += 1) {
+      const base = randomProgramme(seed, { groups: 3 + (seed % 4), maxOptions: 4, budgetShare: [0, 0.2, 0.5][seed % 3]!, sideConstraints: seed % 3 === 0 });
+      // Values become fractions with no exact binary form (x / 7), and every fifth cost is zero.
+      const programme = {
+        ...base,
+        groups: base.groups.map((g, i) => ({
+          ...g,
+          options: g.options.map((o, a) => ({ cost: (i + a) % 5 === 0 ? 0 : o.cost, value: (i * a) % 4 === 1 ? 0 : o.value / 7 })),
+        })),
+      };
+      const reference = bruteForceOptimum(programme);
+      const solution = await solveProgramme(programme, { engine: "exact" });
+      if (reference.objective === null) {
+        expect(solution.status, `seed ${seed}`).toBe("infeasible");
+      } else {
+        expect(solution.status, `seed ${seed}`).toBe("optimal");
+        expect(checkSolution(programme, solution.choice).feasible).toBe(true);
+        expect(Math.abs(solution.objective - reference.objective), `seed ${seed}`).toBeLessThanOrEqual(1e-9 * Math.max(1, reference.objective));
+      }
+      ran += 1;
+    }
+    expect(ran).toBe(200);
+  });
 });

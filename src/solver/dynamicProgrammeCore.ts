@@ -1,0 +1,203 @@
+import { hullNumbers } from "./buildGroupHull.js";
+
+/**
+ * A multiple-choice knapsack in which every group must take exactly one candidate (doing
+ * nothing, when allowed, is passed in as a zero candidate).
+ */
+export interface CoreProblem {
+  readonly candidateCosts: readonly Float64Array[];
+  readonly candidateValues: readonly Float64Array[];
+  readonly budget: number;
+  /** A feasible choice (candidate per group) to start from, and its value. */
+  readonly incumbent: Int32Array;
+  readonly incumbentValue: number;
+  /** States whose bound is within this of the incumbent are dropped (absolute, value units). */
+  readonly tolerance: number;
+  /** Date.now() after which the search stops. */
+  readonly deadline: number;
+}
+
+export interface CoreResult {
+  readonly choice: Int32Array;
+  readonly value: number;
+  /** True when the search finished: no choice beats `value` by more than the tolerance. */
+  readonly proven: boolean;
+  /** Largest bound of any dropped state (-Infinity if none): with `value`, the proven upper bound. */
+  readonly prunedBound: number;
+  /** States kept over all groups (a measure of the work done). */
+  readonly states: number;
+}
+
+/** Most (cost, value) states kept after one group before the search gives up. */
+const MAX_STATES = 2_000_000;
+
+/**
+ * Exact search over the core by dynamic programming on (cost, value) states, group by group
+ * (Nemhauser-Ullmann style list of undominated partial programmes, as in Pisinger's 1995
+ * minimal algorithm for the multiple-choice knapsack). A state is dropped when another costs no
+ * more and gives at least as much, or when its value plus the LP bound of the groups still to
+ * come (greedy over their hull segments, evaluated by binary search on prefix sums) cannot beat
+ * the incumbent by more than the tolerance. Unlike depth-first branching it does not stall on
+ * subset-sum-like cores where many options share almost the same ratio.
+ */
+export function dynamicProgrammeCore(problem: CoreProblem): CoreResult {
+  const groupCount = problem.candidateCosts.length;
+  const costs = problem.candidateCosts;
+  const values = problem.candidateValues;
+  const tolerance = problem.tolerance;
+  const hulls = costs.map((c, k) => hullNumbers(Array.from(c, (cost, a) => ({ cost, value: values[k]![a]! })), true));
+  const sorted = sortSegments(hulls, costs, values);
+
+  let bestValue = problem.incumbentValue;
+  let prunedBound = Number.NEGATIVE_INFINITY;
+  let stateCost = new Float64Array([0]);
+  let stateValue = new Float64Array([0]);
+  const parents: Int32Array[] = [];
+  const picks: Int32Array[] = [];
+  let stopped = false;
+
+  for (let k = 0; k < groupCount && stateCost.length > 0; k += 1) {
+    if (Date.now() > problem.deadline) {
+      stopped = true;
+      break;
+    }
+    const candidates = hulls[k]!.undominated;
+    const next = suffixBound(sorted, k + 1);
+    const size = stateCost.length * candidates.length;
+    if (size > 6 * MAX_STATES) {
+      stopped = true;
+      break;
+    }
+    const newCost = new Float64Array(size);
+    const newValue = new Float64Array(size);
+    const newParent = new Int32Array(size);
+    const newPick = new Int32Array(size);
+    let count = 0;
+    for (let s = 0; s < stateCost.length; s += 1) {
+      for (const a of candidates) {
+        const c = stateCost[s]! + costs[k]![a]!;
+        const left = problem.budget - c;
+        if (left < 0) continue;
+        const v = stateValue[s]! + values[k]![a]!;
+        const bound = v + next(left);
+        if (bound <= bestValue + tolerance) {
+          prunedBound = Math.max(prunedBound, bound);
+          continue;
+        }
+        newCost[count] = c;
+        newValue[count] = v;
+        newParent[count] = s;
+        newPick[count] = a;
+        count += 1;
+      }
+    }
+    // Sort by cost, then value descending, then generation order; keep strictly rising values.
+    const order = new Int32Array(count);
+    for (let i = 0; i < count; i += 1) order[i] = i;
+    order.sort((x, y) => newCost[x]! - newCost[y]! || newValue[y]! - newValue[x]! || x - y);
+    const keep: number[] = [];
+    let top = Number.NEGATIVE_INFINITY;
+    for (const i of order) {
+      if (newValue[i]! <= top) continue;
+      top = newValue[i]!;
+      keep.push(i);
+    }
+    if (keep.length > MAX_STATES) {
+      stopped = true;
+      break;
+    }
+    stateCost = Float64Array.from(keep, (i) => newCost[i]!);
+    stateValue = Float64Array.from(keep, (i) => newValue[i]!);
+    parents.push(Int32Array.from(keep, (i) => newParent[i]!));
+    picks.push(Int32Array.from(keep, (i) => newPick[i]!));
+  }
+
+  const choice = Int32Array.from(problem.incumbent);
+  if (!stopped && parents.length === groupCount && stateValue.length > 0) {
+    // Values rise with cost among kept states, so the last state is the best.
+    let s = stateValue.length - 1;
+    if (stateValue[s]! > bestValue) {
+      bestValue = stateValue[s]!;
+      for (let k = groupCount - 1; k >= 0; k -= 1) {
+        choice[k] = picks[k]![s]!;
+        s = parents[k]![s]!;
+      }
+    }
+  }
+  return { choice, value: bestValue, proven: !stopped, prunedBound, states: parents.reduce((n, p) => n + p.length, 0) };
+}
+
+// The LP optimum of groups `first`.. as a function of their budget (-Infinity if even their
+// cheapest options do not fit): base values plus the greedy over their segments in ratio order.
+// Built per layer from one global sort, so memory stays linear in the number of segments.
+function suffixBound(sorted: SortedSegments, first: number): (budget: number) => number {
+  const prefixCost: number[] = [0];
+  const prefixValue: number[] = [0];
+  const ratios: number[] = [];
+  for (let j = 0; j < sorted.group.length; j += 1) {
+    if (sorted.group[j]! < first) continue;
+    prefixCost.push(prefixCost[prefixCost.length - 1]! + sorted.cost[j]!);
+    prefixValue.push(prefixValue[prefixValue.length - 1]! + sorted.value[j]!);
+    ratios.push(sorted.ratio[j]!);
+  }
+  const fixedCost = sorted.suffixBaseCost[first]!;
+  const fixedValue = sorted.suffixBaseValue[first]!;
+  return (budget) => {
+    const room = budget - fixedCost;
+    if (room < 0) return Number.NEGATIVE_INFINITY;
+    // Largest j with prefixCost[j] <= room: segments 0..j-1 fit whole, segment j in part.
+    let lo = 0;
+    let hi = ratios.length;
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      if (prefixCost[mid]! <= room) lo = mid;
+      else hi = mid - 1;
+    }
+    const partial = lo < ratios.length ? (room - prefixCost[lo]!) * ratios[lo]! : 0;
+    return fixedValue + prefixValue[lo]! + partial;
+  };
+}
+
+interface SortedSegments {
+  readonly group: Int32Array;
+  readonly cost: Float64Array;
+  readonly value: Float64Array;
+  readonly ratio: Float64Array;
+  /** Sum over groups k.. of their cheapest hull vertex (index groupCount holds 0). */
+  readonly suffixBaseCost: Float64Array;
+  readonly suffixBaseValue: Float64Array;
+}
+
+// All hull segments of all groups, sorted by ratio descending (ties: group, then position).
+function sortSegments(
+  hulls: readonly { readonly vertices: readonly number[] }[],
+  costs: readonly Float64Array[],
+  values: readonly Float64Array[],
+): SortedSegments {
+  const groupCount = hulls.length;
+  const suffixBaseCost = new Float64Array(groupCount + 1);
+  const suffixBaseValue = new Float64Array(groupCount + 1);
+  const rows: { ratio: number; cost: number; value: number; group: number; from: number }[] = [];
+  for (let k = groupCount - 1; k >= 0; k -= 1) {
+    const vertices = hulls[k]!.vertices;
+    suffixBaseCost[k] = suffixBaseCost[k + 1]! + costs[k]![vertices[0]!]!;
+    suffixBaseValue[k] = suffixBaseValue[k + 1]! + values[k]![vertices[0]!]!;
+    let previousRatio = Number.POSITIVE_INFINITY;
+    for (let p = 0; p + 1 < vertices.length; p += 1) {
+      const cost = costs[k]![vertices[p + 1]!]! - costs[k]![vertices[p]!]!;
+      const value = values[k]![vertices[p + 1]!]! - values[k]![vertices[p]!]!;
+      // Rounding must never let a later segment of a hull look steeper than an earlier one.
+      previousRatio = Math.min(previousRatio, value / cost);
+      rows.push({ ratio: previousRatio, cost, value, group: k, from: p });
+    }
+  }
+  rows.sort((x, y) => y.ratio - x.ratio || x.group - y.group || x.from - y.from);
+  return {
+    group: Int32Array.from(rows, (r) => r.group),
+    cost: Float64Array.from(rows, (r) => r.cost),
+    value: Float64Array.from(rows, (r) => r.value),
+    ratio: Float64Array.from(rows, (r) => r.ratio),
+    suffixBaseCost,
+    suffixBaseValue,
+  };
+}

@@ -1,0 +1,66 @@
+import type { Highs, ModelData } from "highs";
+
+/** What one HiGHS run left behind, copied out before the model is disposed. */
+export interface HighsRun {
+  readonly status: "optimal" | "infeasible" | "time-limit" | "failed";
+  /** Column values; empty when HiGHS holds no feasible point. */
+  readonly colValue: Float64Array;
+  /** Row duals (LP runs only; for a maximisation a binding <= row has a positive dual). */
+  readonly rowDual: Float64Array;
+  /** Proven upper bound (MIP dual bound, or the LP optimum). */
+  readonly bound: number;
+  readonly detail: string;
+}
+
+export interface HighsRunSettings {
+  readonly timeLimitSeconds: number;
+  /** mip_rel_gap: 0 for a proof (HiGHS's default 1e-4 stops at suboptimal answers it calls optimal). */
+  readonly relativeGap: number;
+  /** mip_abs_gap, in objective units. */
+  readonly absoluteGap: number;
+  /** A feasible 0-1 point to start the MIP search from (one value per column). */
+  readonly start?: Float64Array;
+}
+
+/**
+ * Runs HiGHS on one model and always disposes it. Options: no output, the given gaps and time
+ * limit (HiGHS can overrun its time limit during set-up on very large models; callers that need
+ * a hard stop run it in a worker thread).
+ */
+export function runHighs(highs: Highs, data: ModelData, settings: HighsRunSettings): HighsRun {
+  const model = highs.createModel(data);
+  try {
+    model.options.set({
+      output_flag: false,
+      mip_rel_gap: settings.relativeGap,
+      mip_abs_gap: settings.absoluteGap,
+      time_limit: Math.max(0.001, settings.timeLimitSeconds),
+    });
+    if (settings.start !== undefined) model.setSolution({ colValue: settings.start });
+    const { modelStatus } = model.run();
+    const codes = highs.constants.modelStatus;
+    const integer = data.integrality !== undefined;
+    const hasPoint = Number(model.info.get("primal_solution_status")) === 2;
+    const solution = hasPoint ? model.getSolution() : undefined;
+    const colValue = solution?.colValue ?? new Float64Array(0);
+    const rowDual = !integer && solution !== undefined ? solution.rowDual : new Float64Array(0);
+    const bound = integer ? Number(model.info.get("mip_dual_bound")) : hasPoint ? model.getObjectiveValue() : Number.NaN;
+    if (modelStatus === codes.optimal) return { status: "optimal", colValue, rowDual, bound, detail: "optimal" };
+    // A model without columns (no site has options) is solved by choosing nothing.
+    if (modelStatus === codes.empty && data.numCols === 0) {
+      return { status: "optimal", colValue: new Float64Array(0), rowDual: new Float64Array(data.numRows), bound: 0, detail: "empty" };
+    }
+    if (modelStatus === codes.infeasible || modelStatus === codes.unboundedOrInfeasible) {
+      return { status: "infeasible", colValue: new Float64Array(0), rowDual, bound: Number.NaN, detail: "infeasible" };
+    }
+    if (modelStatus === codes.timeLimit || modelStatus === codes.interrupted || modelStatus === codes.iterationLimit) {
+      return { status: "time-limit", colValue, rowDual, bound, detail: `stopped with model status ${modelStatus}` };
+    }
+    return { status: "failed", colValue, rowDual, bound: Number.NaN, detail: `HiGHS ended with model status ${modelStatus}` };
+  } catch (error) {
+    const detail = error instanceof Error ? error.message : String(error);
+    return { status: "failed", colValue: new Float64Array(0), rowDual: new Float64Array(0), bound: Number.NaN, detail };
+  } finally {
+    model.dispose();
+  }
+}

@@ -1,0 +1,213 @@
+import { dynamicProgrammeCore } from "./dynamicProgrammeCore.js";
+import type { BudgetLayout } from "./buildBudgetLayout.js";
+import { NO_OPTION } from "./buildGroupHull.js";
+import type { EngineResult, SolveOptions } from "./types.js";
+
+/**
+ * Relative tolerance at which the exact engines call a programme optimal: bounds within
+ * 1e-10 x max(1, |bound|) of the incumbent are treated as equal. It only absorbs floating-point
+ * rounding in sums of up to ~10^5 terms (about 1e-12 relative), so `optimal` means optimal.
+ */
+export const OPTIMALITY_TOLERANCE = 1e-10;
+
+/**
+ * The dedicated exact engine for the single-budget structure (multiple-choice knapsack):
+ * 1. LP relaxation by taking hull segments in ratio order; the critical segment's ratio is the
+ *    budget's marginal value lambda, and lambda x budget + sum of each group's best value - lambda x cost
+ *    is the upper bound U (Lagrangian form, equal to the LP optimum).
+ * 2. A greedy incumbent: the rounded-down LP filled with every later segment that still fits.
+ * 3. Reduced-cost fixing: an option whose reduced value falls more than U - incumbent below its
+ *    group's best cannot be in any better programme; most groups keep a single option.
+ * 4. An exact search (`dynamicProgrammeCore`) over the few groups left (the core), first at a
+ *    32x tighter threshold for a quick better incumbent, then widening until the proof holds.
+ * Returns `optimal` only when the search finished; the bound is then within the tolerance.
+ */
+export function solveSingleBudget(layout: BudgetLayout, statedBudget: number, settings: Required<SolveOptions>): EngineResult {
+  // Sums of costs in a different order can differ in the last bits; without this allowance a
+  // programme that spends the budget exactly could be rejected. checkSolution allows 1e-9.
+  const budget = statedBudget + BUDGET_ROUNDING_ALLOWANCE * Math.max(1, statedBudget);
+  const started = Date.now();
+  const { canonical, hulls, groups } = layout;
+  const n = canonical.length;
+  const choice: (number | null)[] = new Array<number | null>(n).fill(null);
+  const remaining0 = budget - layout.baseCost;
+  if (remaining0 < 0) {
+    return { status: "infeasible", choice, bound: Number.NaN, budgetMarginalValue: Number.NaN };
+  }
+  const cost = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.cost);
+  const value = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.value);
+
+  // 1. LP relaxation.
+  const level = new Int32Array(n);
+  let remaining = remaining0;
+  let lpValue = layout.baseValue;
+  let critical = -1;
+  const segments = layout.segmentGroup.length;
+  for (let s = 0; s < segments; s += 1) {
+    if (layout.segmentCost[s]! <= remaining) {
+      remaining -= layout.segmentCost[s]!;
+      lpValue += layout.segmentValue[s]!;
+      level[layout.segmentGroup[s]!] += 1;
+    } else {
+      critical = s;
+      break;
+    }
+  }
+  const setChoice = (k: number, a: number): void => {
+    choice[canonical[k]!] = a < 0 ? null : a;
+  };
+  if (critical < 0) {
+    // Every group can have its best option: the LP optimum is integral and the budget is slack.
+    for (let k = 0; k < n; k += 1) setChoice(k, hulls[k]!.vertices[level[k]!]!);
+    return { status: "optimal", choice, bound: lpValue, budgetMarginalValue: 0 };
+  }
+  const lambda = layout.segmentRatio[critical]!;
+
+  // 2. Greedy incumbent.
+  let incumbentValue = lpValue;
+  let left = remaining;
+  for (let s = critical + 1; s < segments; s += 1) {
+    const k = layout.segmentGroup[s]!;
+    if (level[k] !== layout.segmentFrom[s]! || layout.segmentCost[s]! > left) continue;
+    left -= layout.segmentCost[s]!;
+    incumbentValue += layout.segmentValue[s]!;
+    level[k] += 1;
+  }
+  const incumbent: Int32Array = Int32Array.from(level, (p, k) => hulls[k]!.vertices[p]!);
+
+  // 3. Lagrangian bound; per group its best option at lambda and how far the runner-up falls short.
+  const reduced: ReducedValues = {
+    best: new Float64Array(n),
+    bestOption: new Int32Array(n),
+    secondGap: new Float64Array(n),
+  };
+  let upper = lambda * budget;
+  for (let k = 0; k < n; k += 1) {
+    const g = canonical[k]!;
+    let first = Number.NEGATIVE_INFINITY;
+    let second = Number.NEGATIVE_INFINITY;
+    let firstOption = NO_OPTION;
+    for (const a of hulls[k]!.undominated) {
+      const r = value(g, a) - lambda * cost(g, a);
+      if (r > first) {
+        second = first;
+        first = r;
+        firstOption = a;
+      } else if (r > second) {
+        second = r;
+      }
+    }
+    reduced.best[k] = first;
+    reduced.bestOption[k] = firstOption;
+    reduced.secondGap[k] = first - second;
+    upper += first;
+  }
+  const tolerance = Math.max(OPTIMALITY_TOLERANCE, settings.relativeGap) * Math.max(1, Math.abs(upper));
+  if (upper - incumbentValue <= tolerance) {
+    for (let k = 0; k < n; k += 1) setChoice(k, incumbent[k]!);
+    return { status: "optimal", choice, bound: Math.max(upper, incumbentValue), budgetMarginalValue: lambda };
+  }
+  // 4. Exact search over the core. A first pass uses a tighter threshold than the incumbent
+  // allows (a much smaller core); its better incumbent then narrows the next, wider pass. A pass
+  // whose optimum z meets U - z <= threshold is a proof, since every dropped option caps its
+  // programmes below U - threshold.
+  const deadline = started + settings.timeLimitSeconds * 1000;
+  let incumbentChoice: Int32Array = incumbent;
+  let threshold = Math.max(tolerance, (upper - incumbentValue) / FIRST_PASS_DIVISOR);
+  for (;;) {
+    const pass = searchRestricted(layout, budget, lambda, reduced, incumbentChoice, threshold, tolerance, deadline);
+    incumbentChoice = pass.choice;
+    incumbentValue = pass.value;
+    if (!pass.proven) {
+      for (let k = 0; k < n; k += 1) setChoice(k, incumbentChoice[k]!);
+      return { status: "time-limit", choice, bound: upper, budgetMarginalValue: lambda };
+    }
+    if (upper - incumbentValue <= threshold) {
+      for (let k = 0; k < n; k += 1) setChoice(k, incumbentChoice[k]!);
+      return { status: "optimal", choice, bound: Math.max(incumbentValue, pass.bound), budgetMarginalValue: lambda };
+    }
+    threshold = Math.min(upper - incumbentValue + tolerance, threshold * 4);
+  }
+}
+
+/** Relative allowance on the budget for floating-point rounding in sums of costs. */
+const BUDGET_ROUNDING_ALLOWANCE = 1e-11;
+
+/** How much tighter than the incumbent allows the first pass's threshold is. */
+const FIRST_PASS_DIVISOR = 32;
+
+interface PassResult {
+  /** Option per canonical group (NO_OPTION for none). */
+  readonly choice: Int32Array;
+  readonly value: number;
+  readonly proven: boolean;
+  /** Proven upper bound within the restriction. */
+  readonly bound: number;
+}
+
+/** Per canonical group at lambda: best reduced value, the option giving it, and the runner-up's shortfall. */
+interface ReducedValues {
+  readonly best: Float64Array;
+  readonly bestOption: Int32Array;
+  readonly secondGap: Float64Array;
+}
+
+// Reduced-cost fixing at `threshold`, then the exact core search over the groups left with a choice.
+// A group keeps its options within `threshold` of its best, plus the incumbent's; it is fixed
+// when that leaves one, i.e. the incumbent holds its best option and the runner-up falls short.
+function searchRestricted(
+  layout: BudgetLayout,
+  budget: number,
+  lambda: number,
+  reduced: ReducedValues,
+  incumbent: Int32Array,
+  threshold: number,
+  tolerance: number,
+  deadline: number,
+): PassResult {
+  const { canonical, hulls, groups } = layout;
+  const cost = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.cost);
+  const value = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.value);
+  const choice = Int32Array.from(incumbent);
+  const coreGroups: number[] = [];
+  const coreCandidates: number[][] = [];
+  let fixedCost = 0;
+  let fixedValue = 0;
+  for (let k = 0; k < canonical.length; k += 1) {
+    const g = canonical[k]!;
+    const held = incumbent[k]!;
+    if (held === reduced.bestOption[k] && reduced.secondGap[k]! > threshold) {
+      fixedCost += cost(g, held);
+      fixedValue += value(g, held);
+      continue;
+    }
+    coreGroups.push(k);
+    coreCandidates.push(
+      hulls[k]!.undominated.filter((a) => a === held || reduced.best[k]! - (value(g, a) - lambda * cost(g, a)) <= threshold),
+    );
+  }
+  let incumbentCoreValue = 0;
+  const coreIncumbent = Int32Array.from(coreGroups, (k, i) => {
+    const a = incumbent[k]!;
+    incumbentCoreValue += value(canonical[k]!, a);
+    return coreCandidates[i]!.indexOf(a);
+  });
+  const core = dynamicProgrammeCore({
+    candidateCosts: coreGroups.map((k, i) => Float64Array.from(coreCandidates[i]!, (a) => cost(canonical[k]!, a))),
+    candidateValues: coreGroups.map((k, i) => Float64Array.from(coreCandidates[i]!, (a) => value(canonical[k]!, a))),
+    budget: budget - fixedCost,
+    incumbent: coreIncumbent,
+    incumbentValue: incumbentCoreValue,
+    tolerance,
+    deadline,
+  });
+  coreGroups.forEach((k, i) => {
+    choice[k] = coreCandidates[i]![core.choice[i]!]!;
+  });
+  return {
+    choice,
+    value: fixedValue + core.value,
+    proven: core.proven,
+    bound: fixedValue + core.prunedBound,
+  };
+}

@@ -31,12 +31,10 @@ function withinBudget(programme: Programme, solution: Solution): boolean {
   return cost <= programme.budget * (1 + 1e-12);
 }
 
-// KNOWN DEFECT (reported to the lead): the lp-solver engine, the only one `auto` has today, answers
-// "not-solved: found no feasible programme" on 25 of these 200 programmes although choosing nothing is
-// always feasible here. `it.fails` keeps the suite green while the defect stands and turns red once an
-// engine solves all 200: then change `it.fails` back to `it`.
+// The lp-solver engine answered "not-solved" on 25 of these 200 programmes (funding nothing is always
+// feasible here); `auto` now uses the exact engine, which must reach the HiGHS optimum on all of them.
 describe("costs spanning 1 to 10^10", () => {
-  it.fails("200 seeded programmes reach the HiGHS optimum and stay within budget", async () => {
+  it("200 seeded programmes reach the HiGHS optimum and stay within budget", async () => {
     let ran = 0;
     for (let seed = 1; seed <= 200; seed++) {
       const next = random(seed);
@@ -100,10 +98,10 @@ const site = (id: string, ksi: number, candidates: string[]): Site => ({
   costOverrides: {},
 });
 
-// KNOWN DEFECT (reported): with benefits of about 1e-6 KSI the lp-solver engine reports "optimal" at
-// 6.4e-7 relative below the HiGHS optimum, i.e. an unproven optimum. Change `it.fails` to `it` once fixed.
+// With benefits of about 1e-6 KSI the lp-solver engine reported "optimal" 6.4e-7 (relative) below the
+// HiGHS optimum; the exact engine `auto` uses must match HiGHS.
 describe("CMFs near 1 (tiny benefits)", () => {
-  it.fails("picks the HiGHS optimum when every benefit is a few millionths of a KSI crash", async () => {
+  it("picks the HiGHS optimum when every benefit is a few millionths of a KSI crash", async () => {
     const next = random(7);
     const treatments = Array.from({ length: 4 }, (_, i) => treatment(`t${i}`, 1 - (1 + 9 * next()) * 1e-6, 1000 * (1 + i)));
     const sites = Array.from({ length: 30 }, (_, i) => site(`s${i}`, 1 + Math.floor(next() * 5), ["t0", "t1", "t2", "t3"].filter(() => next() < 0.7).concat(["t0"]).filter((v, k, all) => all.indexOf(v) === k)));

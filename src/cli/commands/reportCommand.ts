@@ -1,6 +1,6 @@
 import type { Command } from "commander";
 import { basename } from "node:path";
-import { bestAlternativesCost } from "../../analysis/bestAlternativesCost.js";
+import { fullFundingCost } from "../../analysis/fullFundingCost.js";
 import { budgetFrontier, budgetLevels } from "../../analysis/budgetFrontier.js";
 import { preparePlan } from "../../analysis/preparePlan.js";
 import { formatProblem, InputError } from "../../io/InputError.js";
@@ -52,7 +52,7 @@ export function registerReportCommand(program: Command, io: CliIo): void {
       const budget = requestedBudget ?? scenario.budget;
       const prepared = preparePlan(scenario);
       // The chosen budget joins the evenly spaced levels so the slider can return to it exactly.
-      const levels = [...new Set([...budgetLevels(0, bestAlternativesCost(prepared), steps), budget])].sort((a, b) => a - b);
+      const levels = [...new Set([...budgetLevels(0, fullFundingCost(prepared), steps), budget])].sort((a, b) => a - b);
       if (io.stderrIsTty) io.stderr(`solving the optimal list at ${levels.length} budget levels...\n`);
       const frontier = await budgetFrontier(prepared, levels, { engine });
       const plan = frontier.find((level) => level.budget === budget)!.plan;

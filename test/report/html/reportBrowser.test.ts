@@ -3,7 +3,7 @@ import { tmpdir } from "node:os";
 import { join, resolve } from "node:path";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { bestAlternativesCost } from "../../../src/analysis/bestAlternativesCost.js";
+import { fullFundingCost } from "../../../src/analysis/fullFundingCost.js";
 import { budgetFrontier, budgetLevels, type FrontierLevel } from "../../../src/analysis/budgetFrontier.js";
 import { preparePlan } from "../../../src/analysis/preparePlan.js";
 import type { CliIo } from "../../../src/cli/CliIo.js";
@@ -50,7 +50,7 @@ describe.skipIf(!browserPresent && !process.env.CI)("HTML report in headless chr
     // The frontier computed here, independently of the page, at the levels the command uses.
     const { scenario } = loadScenario(scenarioFile);
     const prepared = preparePlan(scenario);
-    const levels = [...new Set([...budgetLevels(0, bestAlternativesCost(prepared), STEPS), scenario.budget])].sort((a, b) => a - b);
+    const levels = [...new Set([...budgetLevels(0, fullFundingCost(prepared), STEPS), scenario.budget])].sort((a, b) => a - b);
     frontier = await budgetFrontier(prepared, levels);
     chosenIndex = levels.indexOf(scenario.budget);
 

@@ -8,6 +8,8 @@ export interface BenchProgrammeShape {
   /** Add district spending caps, a spend-share floor for flagged sites and a project-count limit. */
   readonly rules: boolean;
   readonly seed: number;
+  /** Alternatives per site; drawn from 3-6 when absent. */
+  readonly options?: number;
 }
 
 function mulberry32(seed: number): () => number {
@@ -36,7 +38,8 @@ export function generateBenchProgramme(shape: BenchProgrammeShape): Programme {
   const flagged: boolean[] = [];
   let cheapestTotal = 0;
   for (let g = 0; g < shape.sites; g += 1) {
-    const count = 3 + Math.floor(random() * 4);
+    const drawnCount = 3 + Math.floor(random() * 4);
+    const count = shape.options ?? drawnCount;
     const siteRisk = 0.05 + random() * random() * 2;
     const options = [];
     let cheapest = Number.POSITIVE_INFINITY;

@@ -17,7 +17,7 @@ export interface HullNumbers {
  * Upper convex hull of a group's (cost, value) points, plus doing nothing when the group is
  * optional. Options are ordered by cost, then value descending, then index, so ties resolve
  * the same way every time; an option is dominated when an earlier one in that order gives at
- * least as much. Monotone-chain hull (Andrew 1979) over the rest; collinear points are dropped
+ * least as much. Monotone-chain hull (A. M. Andrew, 1979; reference from memory) over the rest; collinear points are dropped
  * from the vertices. Cost O(m log m) for m options.
  */
 export function hullNumbers(options: readonly ProgrammeOption[], required: boolean): HullNumbers {

@@ -34,9 +34,10 @@ const MAX_STATES = 2_000_000;
 /**
  * Exact search over the core by dynamic programming on (cost, value) states, group by group
  * (Nemhauser-Ullmann style list of undominated partial programmes, as in Pisinger's 1995
- * minimal algorithm for the multiple-choice knapsack). A state is dropped when another costs no
- * more and gives at least as much, or when its value plus the LP bound of the groups still to
- * come (greedy over their hull segments, evaluated by binary search on prefix sums) cannot beat
+ * minimal algorithm for the multiple-choice knapsack; both references from memory). A state is
+ * dropped when another costs no more and gives at least as much, or when its value plus the LP
+ * bound of the groups still to come (greedy over their hull segments, evaluated by binary search
+ * on prefix sums) cannot beat
  * the incumbent by more than the tolerance. Unlike depth-first branching it does not stall on
  * subset-sum-like cores where many options share almost the same ratio.
  */

@@ -1,6 +1,8 @@
-import { planProgramme, type PlanResult } from "./planProgramme.js";
-import type { PreparedPlan } from "./preparePlan.js";
+import { prepareProgramme } from "../solver/prepareProgramme.js";
 import type { SolveOptions } from "../solver/types.js";
+import { buildProgramme } from "./buildProgramme.js";
+import { assemblePlan, type PlanResult } from "./planProgramme.js";
+import type { PreparedPlan } from "./preparePlan.js";
 
 /** The optimal list at one budget level of a frontier. */
 export interface FrontierLevel {
@@ -16,13 +18,21 @@ export function budgetLevels(from: number, to: number, steps: number): number[] 
   return Array.from({ length: steps + 1 }, (_, index) => (index === steps ? to : Math.round(from + ((to - from) * index) / steps)));
 }
 
-/** Solves the prepared scenario to optimality at each budget level, in the order given. */
+/**
+ * Solves the prepared scenario to optimality at each budget level, in the order given. The
+ * programme is prepared once, so the hulls and their sort are shared by every level.
+ */
 export async function budgetFrontier(
   prepared: PreparedPlan,
   levels: readonly number[],
   solveOptions: Partial<SolveOptions> = {},
 ): Promise<FrontierLevel[]> {
   const frontier: FrontierLevel[] = [];
-  for (const budget of levels) frontier.push({ budget, plan: await planProgramme(prepared, budget, solveOptions) });
+  if (levels.length === 0) return frontier;
+  const solver = prepareProgramme(buildProgramme(prepared.sites, prepared.scenario.rules, prepared.objective, levels[0]!), solveOptions);
+  for (const budget of levels) {
+    const solution = await solver.solve({ budget });
+    frontier.push({ budget, plan: assemblePlan(prepared, budget, { ...solver.programme, budget }, solution) });
+  }
   return frontier;
 }

@@ -1,5 +1,5 @@
 import { checkSolution } from "../../solver/checkSolution.js";
-import { solveProgramme } from "../../solver/solveProgramme.js";
+import type { PreparedProgramme } from "../../solver/prepareProgramme.js";
 import type { SolveStatus } from "../../solver/types.js";
 import { buildProgramme } from "../buildProgramme.js";
 import type { PreparedPlan } from "../preparePlan.js";
@@ -24,16 +24,23 @@ export interface DrawOutcome {
   readonly planFeasible: boolean;
 }
 
-/** Draws the sites, evaluates the chosen list `planChoice` on them, and re-solves for the draw's best list. */
+/**
+ * Draws the sites, evaluates the chosen list `planChoice` on them, and re-solves `solver` (the
+ * scenario's programme, prepared once) with the draw's values and rules for the draw's best list.
+ */
 export async function evaluateDraw(
   prepared: PreparedPlan,
+  solver: PreparedProgramme,
   planChoice: readonly (number | null)[],
   drawIndex: number,
   settings: DrawSettings,
 ): Promise<DrawOutcome> {
   const sites = drawSites(prepared, drawIndex, settings);
   const programme = buildProgramme(sites, prepared.scenario.rules, prepared.objective, settings.budget);
-  const solution = await solveProgramme(programme, settings.solveOptions);
+  const solution = await solver.solve({
+    values: programme.groups.map((group) => group.options.map((option) => option.value)),
+    constraints: programme.constraints,
+  });
   let planKsiAvoided = 0;
   let planBenefitPV = 0;
   let planLifecycleCostPV = 0;

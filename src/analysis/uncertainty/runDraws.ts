@@ -1,8 +1,14 @@
+import { prepareProgramme } from "../../solver/prepareProgramme.js";
+import { buildProgramme } from "../buildProgramme.js";
 import type { PreparedPlan } from "../preparePlan.js";
 import type { DrawSettings } from "./drawSettings.js";
 import { evaluateDraw, type DrawOutcome } from "./evaluateDraw.js";
 
-/** Runs the draws with the given indices one after another in this thread, reporting each as it finishes. */
+/**
+ * Runs the draws with the given indices one after another in this thread, reporting each as it
+ * finishes. One prepared programme serves every draw: only option values (and value-dependent
+ * rules) change between draws, so the site order and budget layout work is shared.
+ */
 export async function runDraws(
   prepared: PreparedPlan,
   planChoice: readonly (number | null)[],
@@ -11,8 +17,9 @@ export async function runDraws(
   onDraw: (outcome: DrawOutcome) => void = () => {},
 ): Promise<DrawOutcome[]> {
   const outcomes: DrawOutcome[] = [];
+  const solver = prepareProgramme(buildProgramme(prepared.sites, prepared.scenario.rules, prepared.objective, settings.budget), settings.solveOptions);
   for (const drawIndex of drawIndices) {
-    const outcome = await evaluateDraw(prepared, planChoice, drawIndex, settings);
+    const outcome = await evaluateDraw(prepared, solver, planChoice, drawIndex, settings);
     outcomes.push(outcome);
     onDraw(outcome);
   }

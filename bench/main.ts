@@ -4,6 +4,8 @@ import { mkdirSync, writeFileSync } from "node:fs";
 import { cpus } from "node:os";
 import { formatResolveBench, runResolveBench } from "./resolveBench.js";
 import { formatSolverBench, runSolverBench } from "./solverBench.js";
+import { tallyBench } from "./tallyBench.js";
+import { uncertaintyBench } from "./uncertaintyBench.js";
 
 const highsSeconds = Number(process.env.BENCH_HIGHS_SECONDS ?? 120);
 const avertaSeconds = Number(process.env.BENCH_AVERTA_SECONDS ?? 120);
@@ -20,3 +22,14 @@ console.log(formatResolveBench(resolves));
 
 writeFileSync("bench-results/solver.json", `${JSON.stringify({ machine, highsSeconds, rows, resolves }, null, 2)}\n`);
 console.log("\nwritten: bench-results/solver.json");
+
+// Tally before uncertainty: its peak memory is read from this process's maximum resident size.
+console.log("\nCrash assignment (tally): generated crashes against generated sites");
+const tally = tallyBench();
+console.log(tally.summary);
+
+console.log("\nUncertainty: draws with re-optimisation in each (plan included, sensitivity excluded)");
+const uncertainty = await uncertaintyBench();
+
+writeFileSync("bench-results/pipeline.json", `${JSON.stringify({ machine, tally, uncertainty }, null, 2)}\n`);
+console.log("\nwritten: bench-results/pipeline.json");

@@ -24,7 +24,8 @@ export function buildAlternatives(scenario: Scenario, baselines: readonly SiteBa
     const mustFund = scenario.rules.find((rule) => rule.kind === "must-fund" && rule.site === site.id);
     const neverFund = scenario.rules.filter((rule) => rule.kind === "never-fund" && rule.site === site.id);
     if (neverFund.some((rule) => rule.kind === "never-fund" && rule.treatments.length === 0)) {
-      return { site, alternatives: [], required: false, excludedBy: "never-fund rule" };
+      // A must-fund rule on the same site stays required, so the solver reports the conflict instead of hiding it.
+      return { site, alternatives: [], required: mustFund !== undefined, excludedBy: "never-fund rule" };
     }
     const candidates = site.candidates.map((id) => treatments.get(id)).filter((t): t is Treatment => t !== undefined);
     const sets = enumerateTreatmentSets(candidates, {

@@ -1,4 +1,5 @@
 import type { Programme, ProgrammeGroup, SideConstraint } from "../src/solver/types.js";
+import { seededRandom as mulberry32 } from "../scripts/seededRandom.js";
 
 /** Shape of a generated benchmark programme. */
 export interface BenchProgrammeShape {
@@ -12,16 +13,6 @@ export interface BenchProgrammeShape {
   readonly options?: number;
 }
 
-function mulberry32(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const DISTRICTS = 4;
 

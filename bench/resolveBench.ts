@@ -1,5 +1,6 @@
 import { prepareProgramme } from "../src/solver/prepareProgramme.js";
 import { generateBenchProgramme } from "./generateBenchProgramme.js";
+import { seededRandom as mulberry32 } from "../scripts/seededRandom.js";
 
 /** One re-solve workload: how many solves, how long in all, and whether each was proven optimal. */
 export interface ResolveBenchRow {
@@ -10,16 +11,6 @@ export interface ResolveBenchRow {
   readonly allOptimal: boolean;
 }
 
-function mulberry32(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /**
  * Times the re-solve workloads other commands run on one prepared programme: a 40-level budget

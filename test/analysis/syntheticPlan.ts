@@ -2,6 +2,9 @@ import type { PreparedPlan } from "../../src/analysis/preparePlan.js";
 import type { SiteAlternatives } from "../../src/model/buildAlternatives.js";
 import { completeCrashMatrix } from "../../src/model/crashMatrix.js";
 import type { Alternative, Objective, PolicyRule, Scenario, Site } from "../../src/model/types.js";
+import { seededRandom } from "../../scripts/seededRandom.js";
+
+export { seededRandom };
 
 /** One alternative as a test writes it: whole-number capital cost and KSI avoided; benefit optional. */
 export interface SyntheticOption {
@@ -71,17 +74,6 @@ export function syntheticPlan(sites: readonly SyntheticSite[], budget: number, o
   return { scenario, objective, baselines: [], sites: entries };
 }
 
-/** Mulberry32 (public-domain algorithm by Tommy Ettinger): a seeded generator uniform in [0, 1). */
-export function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** Random small sites with whole-number costs and KSI, so every sum is exact in floating point. */
 export function randomSites(seed: number, count: number, maxOptions: number): SyntheticSite[] {

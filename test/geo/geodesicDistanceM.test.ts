@@ -4,23 +4,13 @@ import { geodesicDistanceM } from "../../src/geo/geodesicDistanceM.js";
 import { fromPlane, localPlane, planeX, planeY } from "../../src/geo/localPlane.js";
 import { polylineLengthKm } from "../../src/geo/polylineLengthKm.js";
 import { polylineMidpoint } from "../../src/geo/polylineMidpoint.js";
+import { seededRandom as random } from "../../scripts/seededRandom.js";
 
 // Reference: GeographicLib (C. F. F. Karney, "Algorithms for geodesics", J. Geodesy 87, 2013),
 // its JavaScript port installed as a devDependency for tests only.
 const wgs84 = geographiclib.Geodesic.WGS84;
 const reference = (lat1: number, lon1: number, lat2: number, lon2: number) => wgs84.Inverse(lat1, lon1, lat2, lon2).s12!;
 
-/** A seeded generator (mulberry32) so the same pairs are checked every run. */
-function random(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 describe("geodesicDistanceM (Vincenty inverse) against GeographicLib", () => {
   it("agrees to 0.1 mm on 200 seeded pairs from 1 m to 5000 km", () => {

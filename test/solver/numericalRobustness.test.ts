@@ -7,20 +7,10 @@ import { checkSolution } from "../../src/solver/checkSolution.js";
 import { solveProgramme } from "../../src/solver/solveProgramme.js";
 import type { Programme, Solution } from "../../src/solver/types.js";
 import { highsOptimum } from "./highsOptimum.js";
+import { seededRandom as random } from "../../scripts/seededRandom.js";
 
 // Reference: HiGHS with mip_rel_gap 0 (highsOptimum.ts), an independent MIP solver used only in tests.
 
-/** Seeded uniform numbers in [0, 1) (mulberry32), so every run sees the same cases. */
-function random(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** Budget feasibility and one option per group, recomputed here without the solver's own checker. */
 function withinBudget(programme: Programme, solution: Solution): boolean {

@@ -1,16 +1,8 @@
 import type { Programme, ProgrammeGroup, SideConstraint } from "../../src/solver/types.js";
+import { seededRandom } from "../../scripts/seededRandom.js";
 
-/** Mulberry32: a small seeded generator (public-domain algorithm by Tommy Ettinger), uniform in [0, 1). */
-export function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export { seededRandom };
+
 
 export interface RandomProgrammeShape {
   readonly groups: number;

@@ -129,7 +129,10 @@ export interface Economics {
 export type Objective = "ksi" | "benefit";
 export type BaselineMethod = "observed" | "empirical-bayes";
 
-/** Share of a total that a group of sites must (floor) or may (cap) take. */
+/**
+ * A policy rule of the scenario. Spending, KSI-share and count rules cover one district, one tag,
+ * or (neither) all sites; spending rules give an absolute amount or a share of total spend.
+ */
 export type PolicyRule =
   | { readonly kind: "must-fund"; readonly site: string; readonly treatments: readonly string[] }
   | { readonly kind: "never-fund"; readonly site: string; readonly treatments: readonly string[] }

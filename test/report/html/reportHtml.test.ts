@@ -7,8 +7,10 @@ import { oneAtATimeSensitivity } from "../../../src/analysis/uncertainty/oneAtAT
 import { loadScenario } from "../../../src/io/loadScenario.js";
 import { CAUTIONS } from "../../../src/report/cautions.js";
 import { formatMoney } from "../../../src/report/formatNumber.js";
+import { capitalListSection } from "../../../src/report/html/capitalListSection.js";
 import { reportHtml } from "../../../src/report/html/reportHtml.js";
 import type { ReportInput, ReportUncertainty } from "../../../src/report/html/ReportInput.js";
+import { syntheticPlan } from "../../analysis/syntheticPlan.js";
 
 let plan: PlanResult;
 let planCase: PlanCase;
@@ -61,6 +63,17 @@ describe("reportHtml: the case for the list (justification, upgrades, ranking)",
     for (const check of planCase.upgrades) {
       expect(projectBlock(html, "capital-list", check.site).includes("tag flag")).toBe(check.forKsiNotMoney);
     }
+  });
+
+  it("flags an upgrade chosen for KSI, not money, with its incremental B/C (the demo has none)", async () => {
+    // The upgrade adds 2 KSI worth 200 for 300 more lifecycle cost: ΔB/ΔC = 200/300 < 1 (HSM Part B, Ch. 7), yet it avoids more KSI.
+    const flagged = await planProgramme(syntheticPlan([{ id: "A", options: [{ cost: 100, ksi: 5, benefit: 1000 }, { cost: 400, ksi: 7, benefit: 1200 }] }], 500));
+    const flaggedCase = casePlan(flagged);
+    expect(flaggedCase.upgrades.map((check) => check.forKsiNotMoney)).toEqual([true]);
+    const html = capitalListSection({ plan: flagged, planCase: flaggedCase, frontier: [{ budget: 500, plan: flagged }], warnings: [], csvFileName: "x.csv" });
+    expect(html.match(/<span class="tag flag"/g)).toHaveLength(1);
+    expect(html).toContain("Chosen for KSI, not money: the step up from t0 has incremental B/C 0.67, below 1; on money alone the site would get t0.");
+    expect(html).toContain("1 project is an upgrade whose extra cost");
   });
 
   it("explains every site left out with the justification's reason and threshold", () => {

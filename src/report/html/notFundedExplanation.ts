@@ -37,7 +37,7 @@ function thresholdText(scenario: Scenario, objective: Objective, site: NotFunded
   if (threshold === null) return " No entry threshold: policy rules besides the budget price the margin.";
   const option = `${treatmentNames(scenario, threshold.treatments)} (${formatMoney(threshold.cost)})`;
   if (threshold.costCut <= 0) {
-    return ` Its option ${option} is within its entry threshold but does not fit the money left beside the funded projects: a near miss at the margin, which a small rise in the budget or a saving elsewhere may bring in.`;
+    return ` Its option ${option} is within its entry threshold but does not fit the money left beside the funded projects: a near miss, an integer effect at the margin rather than a weak project.`;
   }
   const more = objective === "ksi" ? `${formatFixed(threshold.extraValueNeeded, 2)} more KSI crashes` : `${formatMoney(threshold.extraValueNeeded)} more benefit PV`;
   if (!(threshold.costThreshold > 0)) {

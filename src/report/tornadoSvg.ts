@@ -8,13 +8,23 @@ function number(value: number): string {
   return Number(value.toFixed(2)).toString();
 }
 
+// About 6.2 px a character at 12 px sans-serif (common practice for Latin text), so labels stop short of the change dot.
+const LABEL_CHARACTERS = 48;
+
+/** Shortens a label that would run into the bars; the whole label stays in its tooltip. */
+function fitLabel(label: string): string {
+  return label.length <= LABEL_CHARACTERS ? label : `${label.slice(0, LABEL_CHARACTERS - 1).trimEnd()}…`;
+}
+
 const ROW_HEIGHT = 26;
 const LABEL_WIDTH = 330;
 const PANEL_WIDTH = 300;
 const GAP = 40;
 const TOP = 56;
-const LOW_COLOUR = "#3b6ea5";
-const HIGH_COLOUR = "#d08c2e";
+// Okabe–Ito blue, orange and vermillion (colour-blind safe, as the other charts).
+const LOW_COLOUR = "#0072B2";
+const HIGH_COLOUR = "#E69F00";
+const CHANGE_COLOUR = "#D55E00";
 
 /**
  * A tornado chart (standalone SVG) of the one-at-a-time sensitivity: one row per parameter,
@@ -57,13 +67,14 @@ export function tornadoSvg(sensitivity: SensitivityResult, title: string): strin
   rows.forEach((row, index) => {
     const y = TOP + index * ROW_HEIGHT + ROW_HEIGHT / 2 + 4;
     const changes = row.low.listChanges || row.high.listChanges;
-    parts.push(`<text x="10" y="${y}">${escapeXml(`${row.parameter} (${row.low.label} / ${row.high.label})`)}</text>`);
-    if (changes) parts.push(`<circle cx="${LABEL_WIDTH - 8}" cy="${y - 4}" r="4" fill="#b3261e"><title>re-optimising changes the list</title></circle>`);
+    const label = `${row.parameter} (${row.low.label} / ${row.high.label})`;
+    parts.push(`<text x="10" y="${y}">${escapeXml(fitLabel(label))}<title>${escapeXml(label)}</title></text>`);
+    if (changes) parts.push(`<circle cx="${LABEL_WIDTH - 8}" cy="${y - 4}" r="4" fill="${CHANGE_COLOUR}"><title>re-optimising changes the list</title></circle>`);
   });
   const legendY = height - 14;
   parts.push(`<rect x="10" y="${legendY - 10}" width="12" height="12" fill="${LOW_COLOUR}"/><text x="26" y="${legendY}">low value</text>`);
   parts.push(`<rect x="100" y="${legendY - 10}" width="12" height="12" fill="${HIGH_COLOUR}"/><text x="116" y="${legendY}">high value</text>`);
-  parts.push(`<circle cx="206" cy="${legendY - 4}" r="4" fill="#b3261e"/><text x="216" y="${legendY}">re-optimising changes the list</text>`);
+  parts.push(`<circle cx="206" cy="${legendY - 4}" r="4" fill="${CHANGE_COLOUR}"/><text x="216" y="${legendY}">re-optimising changes the list</text>`);
   parts.push("</svg>");
   return parts.join("\n") + "\n";
 }

@@ -2,17 +2,25 @@ import type { Command } from "commander";
 import { basename } from "node:path";
 import { fullFundingCost } from "../../analysis/fullFundingCost.js";
 import { budgetFrontier, budgetLevels } from "../../analysis/budgetFrontier.js";
-import { preparePlan } from "../../analysis/preparePlan.js";
+import { casePlan } from "../../analysis/casePlan.js";
+import type { PlanResult } from "../../analysis/planProgramme.js";
+import { preparePlan, type PreparedPlan } from "../../analysis/preparePlan.js";
+import { analyseUncertainty } from "../../analysis/uncertainty/analyseUncertainty.js";
+import { oneAtATimeSensitivity } from "../../analysis/uncertainty/oneAtATimeSensitivity.js";
 import { formatProblem, InputError } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
 import { checkOutputTarget, writeOutputFile } from "../../io/writeOutputFile.js";
+import type { ReportUncertainty } from "../../report/html/ReportInput.js";
 import { reportHtml } from "../../report/html/reportHtml.js";
 import { planCsv } from "../../report/planCsv.js";
+import { progressBar } from "../../report/progressBar.js";
+import type { EngineName } from "../../solver/types.js";
 import type { CliIo } from "../CliIo.js";
+import { addDrawOptions, parseDrawOptions, type DrawOptions, type DrawOptionText } from "../drawOptions.js";
 import { parseAmountOption, parseChoiceOption, parseIntegerOption } from "../parseOptionValues.js";
 import { ENGINES } from "./planCommand.js";
 
-interface ReportOptions {
+interface ReportOptions extends DrawOptionText {
   out: string;
   force?: boolean;
   budget?: string;
@@ -23,13 +31,15 @@ interface ReportOptions {
 
 /**
  * `averta report <scenario> --out report.html`: one self-contained HTML report with the list,
- * the budget frontier and slider, a map, reasons, assumptions, warnings and cautions.
+ * the budget frontier and slider, a map, the justification (reasons, thresholds, incremental B/C,
+ * the B/C ranking comparison), robustness and sensitivity, assumptions, warnings and cautions.
  */
 export function registerReportCommand(program: Command, io: CliIo): void {
-  program
+  const command = program
     .command("report")
     .description("write a self-contained HTML report of the optimal list for finance and approval")
-    .argument("<scenario>", "scenario YAML file")
+    .argument("<scenario>", "scenario YAML file");
+  addDrawOptions(command, "Monte Carlo draws for the robustness and sensitivity sections (0 leaves both out)")
     .requiredOption("-o, --out <file>", "HTML file to write")
     .option("--force", "replace --out (and --csv) if they already exist")
     .option("-b, --budget <amount>", "budget to use instead of the scenario's (4500000, 4.5M, 750k)")
@@ -39,6 +49,7 @@ export function registerReportCommand(program: Command, io: CliIo): void {
     .action(async (file: string, options: ReportOptions) => {
       const steps = parseIntegerOption("--steps", options.steps, 1, 200);
       const engine = parseChoiceOption("--engine", options.engine, ENGINES);
+      const drawOptions = parseDrawOptions(options, 0);
       const requestedBudget = options.budget === undefined ? undefined : parseAmountOption("--budget", options.budget);
       const force = options.force === true;
       if (options.csv !== undefined && options.csv === options.out) {
@@ -56,10 +67,13 @@ export function registerReportCommand(program: Command, io: CliIo): void {
       if (io.stderrIsTty) io.stderr(`solving the optimal list at ${levels.length} budget levels...\n`);
       const frontier = await budgetFrontier(prepared, levels, { engine });
       const plan = frontier.find((level) => level.budget === budget)!.plan;
+      const uncertainty = drawOptions.draws === 0 ? undefined : await analyseReportUncertainty(io, prepared, plan, drawOptions, engine);
       const csvFileName = options.csv !== undefined ? basename(options.csv) : `${basename(options.out).replace(/\.html?$/i, "")}.csv`;
       const html = reportHtml({
         plan,
+        planCase: casePlan(plan),
         frontier,
+        ...(uncertainty !== undefined && { uncertainty }),
         csvFileName,
         warnings: warnings.map((warning) => ({
           where: formatProblem({ ...warning, message: "", hint: undefined }).replace(/:\s*$/, ""),
@@ -74,4 +88,21 @@ export function registerReportCommand(program: Command, io: CliIo): void {
         io.stderr(`wrote ${options.csv}\n`);
       }
     });
+}
+
+/** The draws and one-at-a-time sensitivity about the report's list, with a progress bar on a terminal. */
+async function analyseReportUncertainty(io: CliIo, prepared: PreparedPlan, plan: PlanResult, options: DrawOptions, engine: EngineName): Promise<ReportUncertainty> {
+  const draws = await analyseUncertainty(prepared, {
+    ...options,
+    sampleBaselines: true,
+    budget: plan.budget,
+    solveOptions: { engine },
+    ...(io.stderrIsTty && { onProgress: (done: number, total: number) => io.stderr(progressBar(done, total)) }),
+  });
+  if (io.stderrIsTty) io.stderr("\n");
+  // The draws re-solve the list themselves; they must describe the list the report shows.
+  if (draws.plan.solution.choice.some((index, group) => index !== plan.solution.choice[group])) {
+    throw new Error("the uncertainty analysis solved a different list from the report's at the same budget");
+  }
+  return { draws, sensitivity: await oneAtATimeSensitivity(plan, { engine }) };
 }

@@ -1,4 +1,3 @@
-import { availableParallelism } from "node:os";
 import type { Command } from "commander";
 import { preparePlan } from "../../analysis/preparePlan.js";
 import { analyseUncertainty } from "../../analysis/uncertainty/analyseUncertainty.js";
@@ -13,18 +12,13 @@ import { uncertaintyJson } from "../../report/uncertaintyJson.js";
 import { uncertaintyTable } from "../../report/uncertaintyTable.js";
 import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
-import { parseAmountOption, parseChoiceOption, parseIntegerOption } from "../parseOptionValues.js";
+import { addDrawOptions, parseDrawOptions, type DrawOptionText } from "../drawOptions.js";
+import { parseAmountOption, parseChoiceOption } from "../parseOptionValues.js";
 import { ENGINES } from "./planCommand.js";
 
-/** Draws and seed used when none are given: same seed, same output, on any machine. */
-export const DEFAULT_DRAWS = 1000;
-export const DEFAULT_SEED = 2027;
 const FORMATS = ["table", "json"] as const;
 
-interface UncertaintyCommandOptions {
-  draws: string;
-  seed: string;
-  threads?: string;
+interface UncertaintyCommandOptions extends DrawOptionText {
   budget?: string;
   format: string;
   out?: string;
@@ -36,13 +30,11 @@ interface UncertaintyCommandOptions {
 
 /** `averta uncertainty <scenario>`: how sure the chosen list is, under CMF and baseline uncertainty. */
 export function registerUncertaintyCommand(program: Command, io: CliIo): void {
-  program
+  const command = program
     .command("uncertainty")
     .description("draw CMFs and baselines from their uncertainty: spread of the list's results, selection probabilities, regret, one-at-a-time sensitivity")
-    .argument("<scenario>", "scenario YAML file")
-    .option("-n, --draws <count>", "Monte Carlo draws", String(DEFAULT_DRAWS))
-    .option("-s, --seed <seed>", "random seed, a whole number from 0 to 4294967295", String(DEFAULT_SEED))
-    .option("-t, --threads <count>", "threads to spread the draws over (the result does not depend on it)")
+    .argument("<scenario>", "scenario YAML file");
+  addDrawOptions(command, "Monte Carlo draws")
     .option("-b, --budget <amount>", "budget to use instead of the scenario's (4500000, 4.5M, 750k)")
     .option("--fixed-baseline", "hold site baselines at their point estimates; draw CMFs only")
     .option("-f, --format <format>", "table or json", "table")
@@ -53,9 +45,7 @@ export function registerUncertaintyCommand(program: Command, io: CliIo): void {
     .action(async (file: string, options: UncertaintyCommandOptions) => {
       const format = parseChoiceOption("--format", options.format, FORMATS);
       const engine = parseChoiceOption("--engine", options.engine, ENGINES);
-      const draws = parseIntegerOption("--draws", options.draws, 1, 1_000_000);
-      const seed = parseIntegerOption("--seed", options.seed, 0, 0xffffffff);
-      const threads = options.threads === undefined ? Math.min(availableParallelism(), 64) : parseIntegerOption("--threads", options.threads, 1, 64);
+      const { draws, seed, threads } = parseDrawOptions(options, 1);
       const budget = options.budget === undefined ? undefined : parseAmountOption("--budget", options.budget);
       const force = options.force === true;
       if (options.tornado !== undefined && !options.tornado.toLowerCase().endsWith(".svg")) {

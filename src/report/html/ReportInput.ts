@@ -1,5 +1,8 @@
 import type { FrontierLevel } from "../../analysis/budgetFrontier.js";
+import type { PlanCase } from "../../analysis/casePlan.js";
 import type { PlanResult } from "../../analysis/planProgramme.js";
+import type { UncertaintyResult } from "../../analysis/uncertainty/analyseUncertainty.js";
+import type { SensitivityResult } from "../../analysis/uncertainty/oneAtATimeSensitivity.js";
 
 /** A data-quality warning as the report shows it: where, what, and what to do. */
 export interface ReportWarning {
@@ -9,56 +12,26 @@ export interface ReportWarning {
   readonly hint?: string;
 }
 
-/** Results of an uncertainty analysis: how often each site was funded across draws. */
-export interface RobustnessInput {
-  /** Site id → share of draws (0..1) in which the site was funded. */
-  readonly selectionProbability: ReadonlyMap<string, number>;
-  readonly draws: number;
-  /** What was varied, e.g. "CMFs drawn from their standard errors (lognormal)". */
-  readonly method: string;
-}
-
-/** One row of a sensitivity analysis: the programme under a changed assumption. */
-export interface SensitivityCase {
-  /** The changed assumption, e.g. "discount rate 7%". */
-  readonly label: string;
-  readonly projects: number;
-  readonly cost: number;
-  readonly ksiAvoided: number;
-  /** Sites funded here but not in the base list, plus the reverse. */
-  readonly sitesChanged?: number;
-}
-
-/** A sensitivity analysis to show beside the base list. */
-export interface SensitivityInput {
-  readonly description: string;
-  readonly cases: readonly SensitivityCase[];
-}
-
-/** A simpler selection method at the same budget, to show what optimising gains. */
-export interface RankingComparison {
-  /** e.g. "fund sites in order of B/C until the budget runs out". */
-  readonly method: string;
-  readonly projects: number;
-  readonly cost: number;
-  readonly ksiAvoided: number;
+/** The uncertainty analysis of the same list: Monte Carlo draws and one-at-a-time sensitivity. */
+export interface ReportUncertainty {
+  /** From `analyseUncertainty` at the report's budget; its plan is the report's list. */
+  readonly draws: UncertaintyResult;
+  readonly sensitivity: SensitivityResult;
 }
 
 /**
- * Everything the HTML report shows. The optional fields come from other analyses; each renders
- * its section (or column, or line) only when present.
+ * Everything the HTML report shows. The uncertainty analysis is optional (it costs many solves);
+ * its sections and column render only when it is given.
  */
 export interface ReportInput {
   /** The optimal list at the chosen budget (one of the frontier's levels). */
   readonly plan: PlanResult;
+  /** The case for that list: justification with entry thresholds, incremental B/C, the B/C ranking comparison (`casePlan(plan)`). */
+  readonly planCase: PlanCase;
   /** Optimal lists at rising budget levels, for the chart and the slider. */
   readonly frontier: readonly FrontierLevel[];
   readonly warnings: readonly ReportWarning[];
   /** File name offered by the embedded "download CSV" link. */
   readonly csvFileName: string;
-  /** Site id → a richer one-line reason, replacing the report's own. */
-  readonly reasons?: ReadonlyMap<string, string>;
-  readonly robustness?: RobustnessInput;
-  readonly sensitivity?: SensitivityInput;
-  readonly rankingComparison?: RankingComparison;
+  readonly uncertainty?: ReportUncertainty;
 }

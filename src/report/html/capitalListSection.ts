@@ -1,36 +1,57 @@
+import type { SelectionFrequency } from "../../analysis/uncertainty/summariseDraws.js";
 import { formatFixed, formatMoney } from "../formatNumber.js";
 import { escapeHtml } from "./escapeHtml.js";
-import { projectReason } from "./projectReason.js";
+import { fundedReason } from "./fundedReason.js";
 import type { ReportInput } from "./ReportInput.js";
 import { treatmentNames } from "./treatmentNames.js";
 
-/** The funded list as a table, one project per row with its reason beneath, and totals. */
+/**
+ * The funded list as a table, one project per row with its reason beneath (from the
+ * justification), upgrades flagged by incremental B/C, the share of uncertainty draws that
+ * select each project when the analysis was run, and totals.
+ */
 export function capitalListSection(input: ReportInput): string {
-  const { plan, robustness } = input;
+  const { plan, planCase, uncertainty } = input;
   const scenario = plan.prepared.scenario;
   const currency = escapeHtml(scenario.currency);
-  const columns = robustness === undefined ? 8 : 9;
+  const columns = uncertainty === undefined ? 8 : 9;
+  const cases = new Map(planCase.justification.funded.map((entry) => [entry.site, entry]));
+  const upgrades = new Map(planCase.upgrades.map((check) => [check.site, check]));
+  const selections = new Map((uncertainty?.draws.summary.selections ?? []).filter((s) => s.inPlan).map((s) => [s.site, s]));
   const rows = plan.funded.map((project) => {
     const { entry, alternative } = project;
-    const probability = robustness?.selectionProbability.get(entry.site.id);
-    const robustnessCell =
-      robustness === undefined ? "" : `<td class="num">${probability === undefined ? "–" : `${formatFixed(100 * probability, 0)}%`}</td>`;
-    const reason = input.reasons?.get(entry.site.id) ?? projectReason(project);
+    const upgrade = upgrades.get(entry.site.id);
+    const reason = fundedReason(scenario, project, cases.get(entry.site.id)!, plan.funded.length, upgrade);
+    const flag = upgrade?.forKsiNotMoney === true ? ' <span class="tag flag" title="incremental B/C below 1 over the next cheaper alternative at this site">chosen for KSI, not money</span>' : "";
+    const robustnessCell = uncertainty === undefined ? "" : selectionCell(selections.get(entry.site.id));
     return `<tbody class="project" data-site="${escapeHtml(entry.site.id)}">
-<tr><td><span class="site-id">${escapeHtml(entry.site.id)}</span> ${escapeHtml(entry.site.name)}${entry.required ? ' <span class="tag">must fund</span>' : ""}</td><td class="treatments">${escapeHtml(treatmentNames(scenario, alternative.treatments))}</td><td>${escapeHtml(entry.site.district)}</td><td class="num">${formatMoney(alternative.cost)}</td><td class="num">${formatFixed(alternative.ksiAvoided, 2)}</td><td class="num">${formatFixed(alternative.bcRatio, 1)}</td><td class="num">${formatMoney(alternative.npv)}</td><td class="num">${formatMoney(alternative.costPerKsi)}</td>${robustnessCell}</tr>
+<tr><td><span class="site-id">${escapeHtml(entry.site.id)}</span> ${escapeHtml(entry.site.name)}${entry.required ? ' <span class="tag">must fund</span>' : ""}</td><td class="treatments">${escapeHtml(treatmentNames(scenario, alternative.treatments))}${flag}</td><td>${escapeHtml(entry.site.district)}</td><td class="num">${formatMoney(alternative.cost)}</td><td class="num">${formatFixed(alternative.ksiAvoided, 2)}</td><td class="num">${formatFixed(alternative.bcRatio, 1)}</td><td class="num">${formatMoney(alternative.npv)}</td><td class="num">${formatMoney(alternative.costPerKsi)}</td>${robustnessCell}</tr>
 <tr class="reason"><td colspan="${columns}">${escapeHtml(reason)}</td></tr>
 </tbody>`;
   });
   const { totals } = plan;
-  const robustnessHead = robustness === undefined ? "" : `<th class="num" title="share of ${robustness.draws} uncertainty draws in which the site is funded">Funded in draws</th>`;
+  const drawCount = uncertainty?.draws.summary.solvedDraws;
+  const robustnessHead = uncertainty === undefined ? "" : `<th class="num" title="share of ${drawCount} uncertainty draws whose optimal list includes this project">Selected in draws</th>`;
+  const robustnessNote =
+    uncertainty === undefined
+      ? ""
+      : ` "Selected in draws" is the share of ${drawCount} uncertainty draws whose optimal list includes the project: <strong>core</strong> at 90% or more, <strong>marginal</strong> at 10% or more (see Robustness).`;
+  const flagged = planCase.upgrades.filter((check) => check.forKsiNotMoney).length;
+  const flagNote = flagged === 0 ? "" : ` ${flagged} project${flagged === 1 ? " is an upgrade" : "s are upgrades"} whose extra cost over the next cheaper option at the site returns less than it costs (incremental B/C below 1; Highway Safety Manual, Part B, Chapter 7): marked "chosen for KSI, not money".`;
   const empty = plan.funded.length === 0 ? `<tbody><tr><td colspan="${columns}">No project is funded at this budget.</td></tr></tbody>` : "";
   return `<section id="capital-list">
 <h2>The capital list</h2>
-<p>${totals.projects} projects, ordered by site. Money in ${currency}; KSI avoided over each project's service life within the horizon; cost per KSI is lifecycle cost PV per KSI crash avoided.${robustness === undefined ? "" : ` "Funded in draws" is the share of ${robustness.draws} draws (${escapeHtml(robustness.method)}) in which the site is in the optimal list.`}</p>
+<p>${totals.projects} projects, ordered by site. Money in ${currency}; KSI avoided over each project's service life within the horizon; cost per KSI is lifecycle cost PV per KSI crash avoided.${flagNote}${robustnessNote}</p>
 <table class="list">
 <thead><tr><th>Site</th><th>Treatments</th><th>District</th><th class="num">Cost</th><th class="num">KSI avoided</th><th class="num">B/C</th><th class="num">NPV</th><th class="num">Cost per KSI</th>${robustnessHead}</tr></thead>
 ${rows.join("\n")}${empty}
-<tfoot><tr><td colspan="3">Total: ${totals.projects} projects</td><td class="num">${formatMoney(totals.cost)}</td><td class="num">${formatFixed(totals.ksiAvoided, 2)}</td><td class="num">${formatFixed(totals.bcRatio, 1)}</td><td class="num">${formatMoney(totals.npv)}</td><td class="num">${formatMoney(totals.costPerKsi)}</td>${robustness === undefined ? "" : "<td></td>"}</tr></tfoot>
+<tfoot><tr><td colspan="3">Total: ${totals.projects} projects</td><td class="num">${formatMoney(totals.cost)}</td><td class="num">${formatFixed(totals.ksiAvoided, 2)}</td><td class="num">${formatFixed(totals.bcRatio, 1)}</td><td class="num">${formatMoney(totals.npv)}</td><td class="num">${formatMoney(totals.costPerKsi)}</td>${uncertainty === undefined ? "" : "<td></td>"}</tr></tfoot>
 </table>
 </section>`;
+}
+
+function selectionCell(selection: SelectionFrequency | undefined): string {
+  // Every funded project is in the summary's selections (inPlan); a miss would be a wiring fault.
+  if (selection === undefined) throw new RangeError("a funded project is missing from the uncertainty summary: was it run on another list?");
+  return `<td class="num selection ${selection.class}" data-probability="${selection.probability}">${formatFixed(100 * selection.probability, 0)}% <span class="class-label">${selection.class}</span></td>`;
 }

@@ -49,8 +49,8 @@ ${budgetSection(input)}
 <figure>${siteMapSvg(input.plan)}</figure>
 </section>
 ${notFundedSection(input)}
-${sensitivitySection(input)}
 ${robustnessSection(input)}
+${sensitivitySection(input)}
 ${assumptionsSection(input.plan)}
 ${warningsSection(input.warnings)}
 ${exportSection(planCsv(input.plan), input.csvFileName)}

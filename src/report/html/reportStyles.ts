@@ -17,7 +17,8 @@ p.lead { font-size: 16px; }
 .figure-label { font-size: 13px; color: var(--muted); text-transform: uppercase; letter-spacing: 0.04em; }
 .figure-value { font-size: 24px; font-weight: 650; font-variant-numeric: tabular-nums; }
 .unit { font-size: 13px; font-weight: 400; color: var(--muted); }
-.gain { background: var(--panel); padding: 8px 12px; }
+.gain { background: var(--panel); padding: 4px 12px; margin: 12px 0; }
+.gain p { margin: 6px 0; }
 .cautions { border: 2px solid var(--warn); background: #fff7f0; padding: 4px 16px 8px; margin: 18px 0; }
 .cautions h2 { border: 0; margin: 8px 0 4px; color: var(--warn); font-size: 18px; }
 .cautions ul { margin: 4px 0; padding-left: 20px; }
@@ -35,8 +36,15 @@ table.costs { max-width: 460px; }
 tr.chosen-row td { font-weight: 650; }
 caption { text-align: left; padding-bottom: 4px; }
 td.treatments { width: 30%; }
-.site-id { font-weight: 650; font-variant-numeric: tabular-nums; }
+#capital-list td:first-child, #not-funded td:first-child { min-width: 11em; }
+table.list th.num { white-space: normal; }
+.site-id { font-weight: 650; font-variant-numeric: tabular-nums; white-space: nowrap; }
 .tag { font-size: 11px; border: 1px solid var(--ink); padding: 0 4px; border-radius: 3px; white-space: nowrap; }
+.tag.flag { border-color: var(--warn); color: var(--warn); }
+td.selection .class-label { font-size: 11px; color: var(--muted); }
+td.selection.core .class-label { color: var(--ink); font-weight: 650; }
+td.selection.rare .class-label { color: var(--warn); }
+figure.tornado svg { width: 100%; height: auto; display: block; }
 figure { margin: 8px 0; }
 svg.chart, svg.map { width: 100%; height: auto; display: block; }
 svg text { font-family: inherit; fill: var(--ink); }

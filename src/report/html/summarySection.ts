@@ -34,11 +34,23 @@ ${rankingGain(input)}
 </section>`;
 }
 
+/** What optimising gains over ranking sites by B/C and funding down the list at the same budget. */
 function rankingGain(input: ReportInput): string {
-  const comparison = input.rankingComparison;
-  if (comparison === undefined) return "";
-  const totals = input.plan.totals;
-  const gain = totals.ksiAvoided - comparison.ksiAvoided;
-  const share = comparison.ksiAvoided > 0 ? ` (${formatFixed((100 * gain) / comparison.ksiAvoided, 1)}%)` : "";
-  return `<p class="gain" id="summary-gain">Compared with ${escapeHtml(comparison.method)} (${comparison.projects} projects, ${formatMoney(comparison.cost)} spent, ${formatFixed(comparison.ksiAvoided, 1)} KSI avoided), this list avoids <strong>${formatFixed(gain, 1)} more KSI crashes</strong>${share} within the same budget.</p>`;
+  const { ranking } = input.planCase;
+  const rankingTotals = ranking.rankingTotals;
+  const gain = ranking.extraKsiAvoided;
+  const currency = escapeHtml(input.plan.prepared.scenario.currency);
+  const share = rankingTotals.ksiAvoided > 0 ? ` (${formatFixed((100 * gain) / rankingTotals.ksiAvoided, 1)}% more)` : "";
+  // Below the table's precision the two lists are, for a reader, equally good.
+  const verdict =
+    Math.abs(gain) < 0.05
+      ? "this list avoids as many KSI crashes within the same budget"
+      : gain > 0
+        ? `this list avoids <strong>${formatFixed(gain, 1)} more KSI crashes</strong>${share} within the same budget`
+        : `the ranking's list avoids ${formatFixed(-gain, 1)} more KSI crashes, but only by breaking the policy rules this list meets`;
+  const rules = ranking.rankingMeetsRules ? "" : " The ranking's list breaks at least one of the scenario's policy rules.";
+  return `<div class="gain" id="summary-gain" data-extra-ksi="${gain}">
+<p>Against the usual practice of ranking sites by benefit-cost ratio and funding down the list until the money runs out (${rankingTotals.projects} projects, ${formatMoney(rankingTotals.cost)} ${currency} spent, ${formatFixed(rankingTotals.ksiAvoided, 1)} KSI avoided), ${verdict}; benefit PV ${ranking.extraBenefitPV >= 0 ? "+" : "−"}${formatMoney(Math.abs(ranking.extraBenefitPV))} ${currency}.${rules}</p>
+<p class="note">Ranking used: ${escapeHtml(ranking.definition)}</p>
+</div>`;
 }

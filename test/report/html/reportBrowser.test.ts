@@ -45,7 +45,7 @@ describe.skipIf(!browserPresent && !process.env.CI)("HTML report in headless chr
     const scenarioFile = join(folder, "hostile.yaml");
     writeFileSync(scenarioFile, demo);
     const out = join(folder, "report.html");
-    expect(await runCli(["report", scenarioFile, "--out", out, "--steps", String(STEPS), "--csv", join(folder, "list.csv")], quiet)).toBe(0);
+    expect(await runCli(["report", scenarioFile, "--out", out, "--steps", String(STEPS), "--draws", "12", "--csv", join(folder, "list.csv")], quiet)).toBe(0);
 
     // The frontier computed here, independently of the page, at the levels the command uses.
     const { scenario } = loadScenario(scenarioFile);
@@ -119,6 +119,16 @@ describe.skipIf(!browserPresent && !process.env.CI)("HTML report in headless chr
     expect(text).toContain(HOSTILE_NAME);
     expect(text).toContain(HOSTILE_DISTRICT);
     expect(await page.locator("#capital-list").textContent()).toContain(HOSTILE_NAME);
+  });
+
+  it("shows the robustness and sensitivity sections, the tornado drawn inline", async () => {
+    expect(await page.locator("#robustness").isVisible()).toBe(true);
+    const tornado = page.locator("#sensitivity figure.tornado svg");
+    expect(await tornado.count()).toBe(1);
+    // Scaled to the column, not its 1010 px natural width.
+    const box = await tornado.boundingBox();
+    expect(box!.width).toBeLessThanOrEqual(1100);
+    expect(await page.locator("#capital-list td.selection").count()).toBe(frontier[chosenIndex]!.plan.funded.length);
   });
 
   it("opens the slider at the chosen budget with the capital list's totals", async () => {

@@ -1,45 +1,139 @@
 import { beforeAll, describe, expect, it } from "vitest";
+import { casePlan, type PlanCase } from "../../../src/analysis/casePlan.js";
 import { planProgramme, type PlanResult } from "../../../src/analysis/planProgramme.js";
 import { preparePlan } from "../../../src/analysis/preparePlan.js";
+import { analyseUncertainty } from "../../../src/analysis/uncertainty/analyseUncertainty.js";
+import { oneAtATimeSensitivity } from "../../../src/analysis/uncertainty/oneAtATimeSensitivity.js";
 import { loadScenario } from "../../../src/io/loadScenario.js";
 import { CAUTIONS } from "../../../src/report/cautions.js";
+import { formatMoney } from "../../../src/report/formatNumber.js";
+import { capitalListSection } from "../../../src/report/html/capitalListSection.js";
 import { reportHtml } from "../../../src/report/html/reportHtml.js";
-import type { ReportInput } from "../../../src/report/html/ReportInput.js";
+import type { ReportInput, ReportUncertainty } from "../../../src/report/html/ReportInput.js";
+import { syntheticPlan } from "../../analysis/syntheticPlan.js";
 
 let plan: PlanResult;
+let planCase: PlanCase;
 let base: ReportInput;
+let uncertainty: ReportUncertainty;
 beforeAll(async () => {
   const { scenario } = loadScenario("scenarios/demo.yaml");
-  plan = await planProgramme(preparePlan(scenario));
-  base = { plan, frontier: [{ budget: plan.budget, plan }], warnings: [{ where: "demo.yaml:3:1", message: "a <b>warning</b>" }], csvFileName: "list.csv" };
+  const prepared = preparePlan(scenario);
+  plan = await planProgramme(prepared);
+  planCase = casePlan(plan);
+  base = { plan, planCase, frontier: [{ budget: plan.budget, plan }], warnings: [{ where: "demo.yaml:3:1", message: "a <b>warning</b>" }], csvFileName: "list.csv" };
+  // Few draws keep the test quick; what is checked is that the report shows what the analysis found.
+  const draws = await analyseUncertainty(prepared, { draws: 24, seed: 11, threads: 1, sampleBaselines: true, budget: plan.budget, solveOptions: {} });
+  uncertainty = { draws, sensitivity: await oneAtATimeSensitivity(plan) };
 });
 
-describe("reportHtml optional inputs (seams for other analyses)", () => {
-  it("leaves out robustness, sensitivity and the ranking gain when not given", () => {
+/** The HTML of one `<tbody>` of a section, by its site id. */
+function projectBlock(html: string, section: string, site: string): string {
+  const body = html.slice(html.indexOf(`<section id="${section}">`));
+  const start = body.indexOf(`<tbody class="project" data-site="${site}"`);
+  expect(start).toBeGreaterThan(-1);
+  return body.slice(start, body.indexOf("</tbody>", start));
+}
+
+describe("reportHtml: the case for the list (justification, upgrades, ranking)", () => {
+  it("states the gain over the B/C ranking that casePlan computed", () => {
+    const html = reportHtml(base);
+    const gain = /id="summary-gain" data-extra-ksi="([^"]+)"/.exec(html);
+    expect(Number(gain![1])).toBe(planCase.ranking.extraKsiAvoided);
+    // The demo is a case where ranking by B/C leaves money on the table: the optimal list avoids more.
+    expect(planCase.ranking.extraKsiAvoided).toBeGreaterThan(1);
+    expect(html).toContain(`${planCase.ranking.rankingTotals.projects} projects, ${formatMoney(planCase.ranking.rankingTotals.cost)} USD spent`);
+  });
+
+  it("gives each funded project its B/C rank and cost per KSI from the justification", () => {
+    const html = reportHtml(base);
+    for (const project of planCase.justification.funded) {
+      const block = projectBlock(html, "capital-list", project.site);
+      expect(block).toMatch(new RegExp(`${project.bcRank}(st|nd|rd|th) of ${planCase.justification.funded.length} by B/C`));
+      expect(block).toContain(`${formatMoney(project.costPerKsi)} lifecycle cost per KSI avoided`);
+    }
+    expect(planCase.justification.funded.length).toBe(plan.funded.length);
+  });
+
+  it("flags exactly the upgrades whose incremental B/C is below 1", () => {
+    const html = reportHtml(base);
+    const list = html.slice(html.indexOf('<section id="capital-list">'), html.indexOf("</section>", html.indexOf('<section id="capital-list">')));
+    const flagged = planCase.upgrades.filter((check) => check.forKsiNotMoney);
+    expect(list.match(/<span class="tag flag"/g)?.length ?? 0).toBe(flagged.length);
+    for (const check of planCase.upgrades) {
+      expect(projectBlock(html, "capital-list", check.site).includes("tag flag")).toBe(check.forKsiNotMoney);
+    }
+  });
+
+  it("flags an upgrade chosen for KSI, not money, with its incremental B/C (the demo has none)", async () => {
+    // The upgrade adds 2 KSI worth 200 for 300 more lifecycle cost: ΔB/ΔC = 200/300 < 1 (HSM Part B, Ch. 7), yet it avoids more KSI.
+    const flagged = await planProgramme(syntheticPlan([{ id: "A", options: [{ cost: 100, ksi: 5, benefit: 1000 }, { cost: 400, ksi: 7, benefit: 1200 }] }], 500));
+    const flaggedCase = casePlan(flagged);
+    expect(flaggedCase.upgrades.map((check) => check.forKsiNotMoney)).toEqual([true]);
+    const html = capitalListSection({ plan: flagged, planCase: flaggedCase, frontier: [{ budget: 500, plan: flagged }], warnings: [], csvFileName: "x.csv" });
+    expect(html.match(/<span class="tag flag"/g)).toHaveLength(1);
+    expect(html).toContain("Chosen for KSI, not money: the step up from t0 has incremental B/C 0.67, below 1; on money alone the site would get t0.");
+    expect(html).toContain("1 project is an upgrade whose extra cost");
+  });
+
+  it("explains every site left out with the justification's reason and threshold", () => {
+    const html = reportHtml(base);
+    const notFunded = planCase.justification.notFunded;
+    expect(notFunded.length).toBeGreaterThan(0);
+    let withThreshold = 0;
+    for (const site of notFunded) {
+      const block = projectBlock(html, "not-funded", site.site);
+      expect(block).toContain(`data-reason="${site.reason}"`);
+      const threshold = site.threshold;
+      if (site.reason === "budget" && threshold !== null && threshold.costCut > 0 && threshold.costThreshold > 0) {
+        expect(block).toContain(`cost at most about ${formatMoney(threshold.costThreshold)}`);
+        expect(block).toContain(`${formatMoney(threshold.costCut)} or`);
+        withThreshold += 1;
+      }
+    }
+    expect(withThreshold).toBeGreaterThan(0);
+    expect(html).toContain('id="threshold-method"');
+    expect(html).toContain("Limits: this is exact for the LP relaxation only");
+  });
+});
+
+describe("reportHtml: robustness and sensitivity from the uncertainty analysis", () => {
+  it("leaves both out, and the draws column, when no analysis was given", () => {
     const html = reportHtml(base);
     expect(html).not.toContain('id="robustness"');
     expect(html).not.toContain('id="sensitivity"');
-    expect(html).not.toContain('id="summary-gain"');
-    expect(html).not.toContain("Funded in draws");
+    expect(html).not.toContain("Selected in draws");
   });
 
-  it("renders each one when given, with figures computed from it", () => {
-    const first = plan.funded[0]!.entry.site.id;
-    const html = reportHtml({
-      ...base,
-      robustness: { selectionProbability: new Map([[first, 0.42]]), draws: 200, method: "CMFs drawn from their standard errors" },
-      sensitivity: { description: "Discount rate varied.", cases: [{ label: "discount rate 7%", projects: 40, cost: 9_600_000, ksiAvoided: 150.3 }] },
-      rankingComparison: { method: "funding sites in order of B/C", projects: 30, cost: 9_500_000, ksiAvoided: plan.totals.ksiAvoided - 12.5 },
-      reasons: new Map([[first, "Richer reason from elsewhere."]]),
-    });
-    expect(html).toContain('id="robustness"');
-    expect(html).toContain("42%");
-    expect(html).toContain('id="sensitivity"');
-    expect(html).toContain("discount rate 7%");
-    expect(html).toMatch(/id="summary-gain"[^]*12\.5 more KSI crashes/);
-    expect(html).toContain("Richer reason from elsewhere.");
+  it("shows each funded project's selection probability and class as analyseUncertainty found them", () => {
+    const html = reportHtml({ ...base, uncertainty });
+    const inPlan = uncertainty.draws.summary.selections.filter((s) => s.inPlan);
+    expect(inPlan.length).toBe(plan.funded.length);
+    for (const selection of inPlan) {
+      const block = projectBlock(html, "capital-list", selection.site);
+      expect(block).toContain(`class="num selection ${selection.class}" data-probability="${selection.probability}"`);
+    }
+    const core = inPlan.filter((s) => s.class === "core").length;
+    expect(html).toMatch(new RegExp(`id="robustness-classes">Of the ${inPlan.length} funded projects, <strong>${core}</strong> are`));
   });
 
+  it("draws the tornado inline and lists every sensitivity row", () => {
+    const html = reportHtml({ ...base, uncertainty });
+    const section = html.slice(html.indexOf('<section id="sensitivity">'), html.indexOf("</section>", html.indexOf('<section id="sensitivity">')));
+    expect(section).toContain('<figure class="tornado"><svg xmlns="http://www.w3.org/2000/svg"');
+    const rows = uncertainty.sensitivity.rows;
+    expect(rows.length).toBeGreaterThan(3);
+    expect(section.match(/<tbody>[^]*<\/tbody>/)![0].match(/<tr>/g)).toHaveLength(rows.length);
+    const changing = rows.filter((row) => row.low.listChanges || row.high.listChanges).length;
+    expect(section).toContain(`${changing} of ${rows.length} assumptions would change it`);
+  });
+
+  it("is a pure function: the same input gives the same bytes", () => {
+    expect(reportHtml({ ...base, uncertainty })).toBe(reportHtml({ ...base, uncertainty }));
+  });
+});
+
+describe("reportHtml: cautions, warnings, export", () => {
   it("carries every caution, the warnings escaped, and a CSV data: link", () => {
     const html = reportHtml(base);
     for (const caution of CAUTIONS) expect(html).toContain(caution.replace(/'/g, "&#39;"));

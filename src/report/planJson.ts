@@ -2,6 +2,7 @@ import type { PlanResult } from "../analysis/planProgramme.js";
 import { CAUTIONS } from "./cautions.js";
 import { describeAssumptions } from "./describeAssumptions.js";
 import { jsonNumber } from "./formatNumber.js";
+import { totalsJson } from "./totalsJson.js";
 
 /**
  * The stable JSON contract of `plan --format json`. Money is in currency units; ratios that
@@ -16,17 +17,7 @@ export function planJson(result: PlanResult): object {
     objective: prepared.objective,
     status: solution.status,
     ...(solution.diagnosis !== undefined && { diagnosis: solution.diagnosis }),
-    totals: {
-      projects: totals.projects,
-      cost: totals.cost,
-      ksiAvoided: totals.ksiAvoided,
-      ksiAvoidedPerYear: totals.ksiAvoidedPerYear,
-      benefitPV: totals.benefitPV,
-      lifecycleCostPV: totals.lifecycleCostPV,
-      bcRatio: jsonNumber(totals.bcRatio),
-      npv: totals.npv,
-      costPerKsi: jsonNumber(totals.costPerKsi),
-    },
+    totals: totalsJson(totals),
     selected: result.funded.map(({ entry, alternative }) => ({
       site: entry.site.id,
       name: entry.site.name,

@@ -1,27 +1,14 @@
 import type { FrontierLevel } from "../../analysis/budgetFrontier.js";
-import { jsonNumber } from "../formatNumber.js";
+import { totalsJson, type TotalsJson } from "../totalsJson.js";
 import { hasList } from "./hasList.js";
 import { treatmentNames } from "./treatmentNames.js";
 import type { Scenario } from "../../model/types.js";
-
-/** Totals of one level as the slider shows them (null where undefined, e.g. cost per KSI of nothing). */
-export interface SliderTotals {
-  readonly projects: number;
-  readonly cost: number;
-  readonly ksiAvoided: number;
-  readonly ksiAvoidedPerYear: number;
-  readonly benefitPV: number;
-  readonly lifecycleCostPV: number;
-  readonly bcRatio: number | null;
-  readonly npv: number;
-  readonly costPerKsi: number | null;
-}
 
 /** One budget level: its totals (null when no list is possible) and funded projects as [site index, treatments, cost, KSI avoided]. */
 export interface SliderLevel {
   readonly budget: number;
   readonly status: string;
-  readonly totals: SliderTotals | null;
+  readonly totals: TotalsJson | null;
   readonly funded: readonly (readonly [number, string, number, number])[];
 }
 
@@ -46,19 +33,7 @@ export function frontierSliderData(scenario: Scenario, frontier: readonly Fronti
       return {
         budget,
         status: plan.solution.status,
-        totals: hasList(plan)
-          ? {
-              projects: totals.projects,
-              cost: totals.cost,
-              ksiAvoided: totals.ksiAvoided,
-              ksiAvoidedPerYear: totals.ksiAvoidedPerYear,
-              benefitPV: totals.benefitPV,
-              lifecycleCostPV: totals.lifecycleCostPV,
-              bcRatio: jsonNumber(totals.bcRatio),
-              npv: totals.npv,
-              costPerKsi: jsonNumber(totals.costPerKsi),
-            }
-          : null,
+        totals: hasList(plan) ? totalsJson(totals) : null,
         funded: plan.funded.map(({ entry, alternative }) => [siteIndex.get(entry.site.id)!, treatmentNames(scenario, alternative.treatments), alternative.cost, alternative.ksiAvoided] as const),
       };
     }),

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { createPcg32 } from "../../../src/model/random/pcg32.js";
 import { drawRandomSource } from "../../../src/model/random/drawRandomSource.js";
 
-// Straight transcription of the paper's pcg32_random_r / pcg32_srandom_r with BigInt, as an
+// A straight port of the paper's pcg32_random_r / pcg32_srandom_r with BigInt, as an
 // independent second implementation (O'Neill 2014, HMC-CS-2014-0905, section 6.3.1; pcg-c-basic).
 function referencePcg32(initState: bigint, initSeq: bigint): () => number {
   const mask = (1n << 64n) - 1n;
@@ -30,7 +30,7 @@ describe("createPcg32", () => {
     expect(outputs).toEqual([0xa15c02b7, 0x7b47f409, 0xba1d3330, 0x83d2f293, 0xbfa4784b, 0xcbed606e]);
   });
 
-  it("matches a BigInt transcription of the reference algorithm over many seeds and streams", () => {
+  it("matches a BigInt port of the reference algorithm over many seeds and streams", () => {
     let compared = 0;
     for (const [state, seq] of [[0n, 0n], [1n, 1n], [0xffffffffffffffffn, 7n], [123456789012345n, 987654321n], [2027n << 32n, 2027n]] as const) {
       const fast = createPcg32(state, seq);

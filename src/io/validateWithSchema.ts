@@ -29,7 +29,7 @@ export function validateWithSchema(source: YamlSource, name: SchemaName): InputP
   const problems: InputProblem[] = [];
   for (const error of validate.errors ?? []) {
     const problem = describe(error, source);
-    const key = `${problem.path}|${problem.line}`;
+    const key = `${problem.path}|${problem.line}|${problem.message}`;
     if (seen.has(key)) continue;
     seen.add(key);
     problems.push(problem);

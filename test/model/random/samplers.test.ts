@@ -48,7 +48,7 @@ describe("sampleGamma (Marsaglia–Tsang)", () => {
 });
 
 describe("lognormalFromMeanSd", () => {
-  // CMF / SE pairs from the demo catalogue's published values (CMF Clearinghouse IDs 5228, 6163; HSM Part D).
+  // CMF / SE pairs from the demo catalogue's published values (the roundabout studies it cites; HSM Part D).
   for (const [cmf, se] of [[0.473, 0.113], [1.132, 0.479], [0.33, 0.06], [2.43, 0.4], [0.65, 0.09]] as const) {
     it(`keeps the CMF ${cmf} as the mean and ${se} as the standard deviation`, () => {
       const parameters = lognormalFromMeanSd(cmf, se);

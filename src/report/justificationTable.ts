@@ -6,20 +6,15 @@ import { formatFixed, formatMoney } from "./formatNumber.js";
 export function justificationTable(planCase: PlanCase): string {
   const { justification, upgrades, ranking, currency } = planCase;
   const style = { head: [], border: [] };
+  // B/C, NPV and cost per KSI are in the list above; this table adds what the list cannot show.
   const funded = new Table({
-    head: ["Site", "Treatments", "B/C", `NPV (${currency})`, `Cost per KSI (${currency})`, "B/C rank", "Other alternatives"],
-    colAligns: ["left", "left", "right", "right", "right", "right", "right"],
+    head: ["Site", "B/C rank", "Other alternatives at the site"],
+    colAligns: ["left", "right", "right"],
     style,
-    wordWrap: true,
-    colWidths: [null, 40],
   } as ConstructorParameters<typeof Table>[0]);
   for (const project of justification.funded) {
     funded.push([
       project.site,
-      project.treatments.join(" + "),
-      formatFixed(project.bcRatio, 2),
-      formatMoney(project.npv),
-      formatMoney(project.costPerKsi),
       `${project.bcRank} of ${justification.funded.length}`,
       project.alternativesNotChosen === 0 ? "" : `${project.alternativesNotChosen} not chosen`,
     ]);

@@ -3,7 +3,7 @@ import { formatFixed, formatMoney } from "../formatNumber.js";
 import { compactAmount } from "./compactAmount.js";
 import { escapeHtml } from "./escapeHtml.js";
 import { hasList } from "./hasList.js";
-import { niceTicks } from "./niceTicks.js";
+import { niceTicks } from "../niceTicks.js";
 import { OKABE_ITO } from "./okabeIto.js";
 
 const WIDTH = 720;

@@ -3,7 +3,7 @@ import type { GeoPoint } from "../../model/types.js";
 import { formatFixed } from "../formatNumber.js";
 import { equirectangularKm, type PlanePoint } from "./equirectangularKm.js";
 import { escapeHtml } from "./escapeHtml.js";
-import { niceTicks } from "./niceTicks.js";
+import { niceTicks } from "../niceTicks.js";
 import { OKABE_ITO } from "./okabeIto.js";
 import { scaleBarKm } from "./scaleBarKm.js";
 

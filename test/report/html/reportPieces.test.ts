@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { compactAmount } from "../../../src/report/html/compactAmount.js";
 import { EARTH_RADIUS_KM, equirectangularKm } from "../../../src/report/html/equirectangularKm.js";
 import { escapeHtml } from "../../../src/report/html/escapeHtml.js";
-import { niceTicks } from "../../../src/report/html/niceTicks.js";
+import { niceTicks } from "../../../src/report/niceTicks.js";
 import { scaleBarKm } from "../../../src/report/html/scaleBarKm.js";
 import { scriptJson } from "../../../src/report/html/scriptJson.js";
 

@@ -2,6 +2,7 @@ import type { FrontierSummary } from "../analysis/summariseFrontier.js";
 import type { FrontierContext } from "./frontierTable.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
 import { niceTicks } from "./niceTicks.js";
+import { escapeXml } from "./escapeXml.js";
 
 const WIDTH = 760;
 const HEIGHT = 460;
@@ -86,8 +87,4 @@ function compactMoney(amount: number): string {
   if (Math.abs(amount) >= 1e6) return `${Number((amount / 1e6).toFixed(2))}M`;
   if (Math.abs(amount) >= 1e3) return `${Number((amount / 1e3).toFixed(1))}k`;
   return String(Math.round(amount));
-}
-
-function escapeXml(text: string): string {
-  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 }

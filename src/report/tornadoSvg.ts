@@ -1,8 +1,5 @@
 import type { SensitivityResult } from "../analysis/uncertainty/oneAtATimeSensitivity.js";
-
-function escapeXml(text: string): string {
-  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
-}
+import { escapeXml } from "./escapeXml.js";
 
 function number(value: number): string {
   return Number(value.toFixed(2)).toString();

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { justifyPlan } from "../../src/analysis/justifyPlan.js";
-import { lpBudgetMarginalValue } from "../../src/analysis/lpBudgetMarginalValue.js";
+import { lpBudgetMarginalValue } from "../../src/solver/lpBudgetMarginalValue.js";
 import { planProgramme } from "../../src/analysis/planProgramme.js";
 import { upgradeChecks } from "../../src/analysis/upgradeChecks.js";
 import { syntheticPlan } from "./syntheticPlan.js";
@@ -30,7 +30,7 @@ describe("justifyPlan", () => {
     // LP relaxation by hand: hull steps A 0→10 (0.8/unit), B 0→20 (0.5), A 10→30 (0.2), M 0→35 (0.171), L (0.075).
     // Budget 30 buys A's first step and B whole; the next step (A's upgrade) sets λ = 4/20 = 0.2 KSI per unit.
     expect(justification.budgetMarginalValue).toBeCloseTo(0.2, 12);
-    // The exact engine reports λ itself; the independent LP computation must agree with it.
+    // The exact engine reports λ itself; the fallback LP computation (checked against HiGHS) must agree with it.
     expect(justification.marginalValueSource).toBe("solver");
     expect(lpBudgetMarginalValue(plan.programme)).toBeCloseTo(0.2, 12);
     const m = justification.notFunded.find((n) => n.site === "M")!.threshold!;

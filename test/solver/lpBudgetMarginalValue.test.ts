@@ -1,8 +1,8 @@
 import highsExport from "highs";
 import { describe, expect, it } from "vitest";
-import { lpBudgetMarginalValue } from "../../src/analysis/lpBudgetMarginalValue.js";
+import { lpBudgetMarginalValue } from "../../src/solver/lpBudgetMarginalValue.js";
 import type { Programme } from "../../src/solver/types.js";
-import { seededRandom } from "./syntheticPlan.js";
+import { seededRandom } from "./randomProgramme.js";
 
 // The package's declarations describe its CommonJS build; under ESM the default export is the loader itself.
 const highsLoader = highsExport as unknown as () => Promise<{ solve(problem: string): { Status: string; Rows: { Dual: number }[] } }>;

@@ -1,13 +1,10 @@
 import { sumCrashMatrix } from "../model/crashMatrix.js";
-import { empiricalBayesGap } from "../model/siteBaselines.js";
+import { empiricalBayesGap, MIN_RECOMMENDED_WINDOW_YEARS, windowYears } from "../model/siteBaselines.js";
 import type { Scenario } from "../model/types.js";
 import type { InputProblem } from "./InputError.js";
 import type { LoadedCatalogue } from "./loadCatalogue.js";
 import type { RawScenario } from "./loadScenario.js";
 import type { YamlSource } from "./readYamlFile.js";
-
-/** Years of crash data below which counts are too noisy to rank sites (common practice: 3 to 5 years). */
-export const MIN_RECOMMENDED_WINDOW_YEARS = 3;
 
 /** Things that are allowed but deserve a second look before the list goes to finance. */
 export function scenarioWarnings(
@@ -17,7 +14,7 @@ export function scenarioWarnings(
   catalogues: readonly LoadedCatalogue[],
 ): InputProblem[] {
   const warnings: InputProblem[] = [];
-  const years = scenario.crashWindow.lastYear - scenario.crashWindow.firstYear + 1;
+  const years = windowYears(scenario);
   if (years < MIN_RECOMMENDED_WINDOW_YEARS) {
     warnings.push({
       code: "short-window",

@@ -11,6 +11,9 @@ export interface SiteBaseline {
   readonly note?: string;
 }
 
+/** Years of crash data below which counts are too noisy to rank sites (common practice: 3 to 5 years). */
+export const MIN_RECOMMENDED_WINDOW_YEARS = 3;
+
 /** Number of whole calendar years in the scenario's crash window. */
 export function windowYears(scenario: Scenario): number {
   return scenario.crashWindow.lastYear - scenario.crashWindow.firstYear + 1;

@@ -1,8 +1,6 @@
 import { REJECT_REASONS } from "../geo/CrashRecord.js";
 import type { CrashDataQuality } from "../geo/tallyNetwork.js";
-
-/** Years of crash data below which counts are too noisy to rank sites (common practice: 3 to 5 years). */
-export const MIN_WINDOW_YEARS = 3;
+import { MIN_RECOMMENDED_WINDOW_YEARS } from "../model/siteBaselines.js";
 
 /**
  * The data-quality account of a tally as plain text: where every row went (assigned, unassigned,
@@ -45,7 +43,7 @@ export function crashQualityText(quality: CrashDataQuality, inputs: { readonly c
     const shown = quality.unassignedLines.slice(0, maxListed);
     lines.push("", `Unassigned rows (no site within reach), lines: ${shown.join(", ")}${quality.unassigned > shown.length ? ", …" : ""}`);
   }
-  if (windowYears < MIN_WINDOW_YEARS) {
+  if (windowYears < MIN_RECOMMENDED_WINDOW_YEARS) {
     lines.push("", `warning: the window covers ${windowYears} year(s); common practice is 3 to 5 years (short windows overstate sites with a chance bad year: regression to the mean)`);
   }
   return lines.join("\n") + "\n";

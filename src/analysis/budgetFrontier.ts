@@ -1,5 +1,4 @@
-import { prepareProgramme } from "../solver/prepareProgramme.js";
-import type { SolveOptions } from "../solver/types.js";
+import { prepareProgramme, type SolveOptions } from "../solver/index.js";
 import { buildProgramme } from "./buildProgramme.js";
 import { assemblePlan, type PlanResult } from "./planProgramme.js";
 import type { PreparedPlan } from "./preparePlan.js";

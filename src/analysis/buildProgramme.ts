@@ -1,6 +1,6 @@
 import type { SiteAlternatives } from "../model/buildAlternatives.js";
 import type { Alternative, Objective, PolicyRule, Site } from "../model/types.js";
-import type { Programme, SideConstraint } from "../solver/types.js";
+import type { Programme, SideConstraint } from "../solver/index.js";
 
 /** What the optimiser maximises for one alternative. */
 export function objectiveValue(alternative: Alternative, objective: Objective): number {

@@ -1,6 +1,6 @@
 import type { Alternative } from "../model/types.js";
 import { objectiveValue } from "./buildProgramme.js";
-import { lpBudgetMarginalValue } from "../solver/lpBudgetMarginalValue.js";
+import { lpBudgetMarginalValue } from "../solver/index.js";
 import type { PlanResult } from "./planProgramme.js";
 
 /** A funded project's case: its economics and where it stands by B/C among the funded. */

@@ -1,7 +1,6 @@
 import type { SiteAlternatives } from "../model/buildAlternatives.js";
 import type { Alternative } from "../model/types.js";
-import { solveProgramme } from "../solver/solveProgramme.js";
-import type { Programme, Solution, SolveOptions } from "../solver/types.js";
+import { solveProgramme, type Programme, type Solution, type SolveOptions } from "../solver/index.js";
 import { buildProgramme } from "./buildProgramme.js";
 import type { PreparedPlan } from "./preparePlan.js";
 import { summariseSelection, type ProgrammeTotals } from "./summariseSelection.js";

@@ -1,5 +1,5 @@
 import type { FrontierLevel } from "./budgetFrontier.js";
-import type { SolveStatus } from "../solver/types.js";
+import type { SolveStatus } from "../solver/index.js";
 
 /** The budget step the marginal rates are scaled to: one million currency units. */
 export const MILLION = 1_000_000;

@@ -1,5 +1,5 @@
 import type { Alternative } from "../model/types.js";
-import { checkSolution } from "../solver/checkSolution.js";
+import { checkSolution } from "../solver/index.js";
 import type { PlanResult } from "./planProgramme.js";
 import { summariseSelection, type ProgrammeTotals } from "./summariseSelection.js";
 

@@ -1,5 +1,5 @@
 import { hasStandardError } from "../../model/sampleTreatmentCmfs.js";
-import type { SolveOptions } from "../../solver/types.js";
+import type { SolveOptions } from "../../solver/index.js";
 import { planProgramme, type PlanResult } from "../planProgramme.js";
 import type { PreparedPlan } from "../preparePlan.js";
 import type { DrawSettings } from "./drawSettings.js";

@@ -1,4 +1,4 @@
-import type { SolveOptions } from "../../solver/types.js";
+import type { SolveOptions } from "../../solver/index.js";
 
 /** What every uncertainty draw needs besides the prepared plan; plain data, so it crosses to worker threads. */
 export interface DrawSettings {

@@ -1,6 +1,4 @@
-import { checkSolution } from "../../solver/checkSolution.js";
-import type { PreparedProgramme } from "../../solver/prepareProgramme.js";
-import type { SolveStatus } from "../../solver/types.js";
+import { checkSolution, type PreparedProgramme, type SolveStatus } from "../../solver/index.js";
 import { buildProgramme } from "../buildProgramme.js";
 import type { PreparedPlan } from "../preparePlan.js";
 import type { DrawSettings } from "./drawSettings.js";

@@ -1,4 +1,4 @@
-import type { SolveOptions } from "../../solver/types.js";
+import type { SolveOptions } from "../../solver/index.js";
 import { planProgramme, type PlanResult } from "../planProgramme.js";
 import { preparePlan } from "../preparePlan.js";
 import { summariseSelection } from "../summariseSelection.js";

@@ -1,4 +1,4 @@
-import { prepareProgramme } from "../../solver/prepareProgramme.js";
+import { prepareProgramme } from "../../solver/index.js";
 import { buildProgramme } from "../buildProgramme.js";
 import type { PreparedPlan } from "../preparePlan.js";
 import type { DrawSettings } from "./drawSettings.js";

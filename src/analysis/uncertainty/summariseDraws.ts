@@ -1,5 +1,5 @@
 import { quantileSorted } from "../../model/quantile.js";
-import type { SolveStatus } from "../../solver/types.js";
+import type { SolveStatus } from "../../solver/index.js";
 import type { PlanResult } from "../planProgramme.js";
 import type { DrawOutcome } from "./evaluateDraw.js";
 

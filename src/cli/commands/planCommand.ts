@@ -10,7 +10,7 @@ import { planJson } from "../../report/planJson.js";
 import { planTable } from "../../report/planTable.js";
 import { justificationJson } from "../../report/justificationJson.js";
 import { justificationTable } from "../../report/justificationTable.js";
-import type { EngineName } from "../../solver/types.js";
+import type { EngineName } from "../../solver/index.js";
 import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
 import { parseAmountOption, parseChoiceOption } from "../parseOptionValues.js";

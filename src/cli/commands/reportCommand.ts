@@ -14,7 +14,7 @@ import type { ReportUncertainty } from "../../report/html/ReportInput.js";
 import { reportHtml } from "../../report/html/reportHtml.js";
 import { planCsv } from "../../report/planCsv.js";
 import { progressBar } from "../../report/progressBar.js";
-import type { EngineName } from "../../solver/types.js";
+import type { EngineName } from "../../solver/index.js";
 import type { CliIo } from "../CliIo.js";
 import { addDrawOptions, parseDrawOptions, type DrawOptions, type DrawOptionText } from "../drawOptions.js";
 import { parseAmountOption, parseChoiceOption, parseIntegerOption } from "../parseOptionValues.js";

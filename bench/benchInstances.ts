@@ -6,7 +6,7 @@ export interface BenchInstance {
   readonly shape: BenchProgrammeShape;
 }
 
-/** The solver benchmark's instances (shapes of notes/solver-measurements.md). */
+/** The solver benchmark's instances (the rows of the README's performance table). */
 export const SOLVER_BENCH_INSTANCES: readonly BenchInstance[] = [
   { name: "single 1,000 b10", shape: { sites: 1_000, budgetShare: 0.1, rules: false, seed: 11 } },
   { name: "single 1,000 b30", shape: { sites: 1_000, budgetShare: 0.3, rules: false, seed: 12 } },

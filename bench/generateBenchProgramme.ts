@@ -17,7 +17,7 @@ export interface BenchProgrammeShape {
 const DISTRICTS = 4;
 
 /**
- * A seeded programme shaped like those in notes/solver-measurements.md: 3-6 alternatives per
+ * A seeded programme shaped like a city's candidate list: 3-6 alternatives per
  * site, costs 20k-3M on a 1k grid, KSI avoided rising with cost with diminishing returns and
  * noise. With `rules`: each of 4 districts capped at 35% of the budget, flagged sites (about
  * 30%) taking at least 30% of total spend, and at most a fifth of the sites funded.

@@ -20,7 +20,7 @@ export interface ChildResult {
 /**
  * Solves one benchmark instance in a fresh Node process and kills it (SIGKILL) if it has not
  * answered `graceSeconds` after its own time limit: HiGHS can overrun its limit badly in set-up
- * on very large models (notes/solver-measurements.md).
+ * on very large models.
  */
 export function runInChild(request: ChildRequest, graceSeconds: number): Promise<ChildResult> {
   return new Promise((resolve) => {

@@ -18,7 +18,7 @@ export interface HighsModelRestriction {
 
 /**
  * Builds the programme as a HiGHS model in compressed sparse columns (about 3-4x faster to
- * load than LP text, per notes/solver-measurements.md): one 0-1 column per option, row 0 the
+ * load than LP text, as we measured): one 0-1 column per option, row 0 the
  * budget, rows 1..G "at most one (exactly one if required)" per group, then one row per side
  * constraint. `integer` false gives the LP relaxation.
  */

@@ -7,8 +7,8 @@ const lpSolver = lpSolverExport as unknown as { Solve(model: ModelDefinition): R
 
 /**
  * Largest programme handed to javascript-lp-solver. Its dense tableau and slow LP relaxation
- * (about 100 s at 200 sites in our measurements, notes/solver-measurements.md) make larger
- * models hang rather than fail, and its time limit is only checked between branch-and-bound nodes.
+ * (about 100 s at 200 sites when we measured it) make larger models hang rather than fail,
+ * and its time limit is only checked between branch-and-bound nodes.
  */
 export const LP_SOLVER_MAX_GROUPS = 300;
 

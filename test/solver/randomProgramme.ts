@@ -34,7 +34,7 @@ const DEFAULT_SHAPE: RandomProgrammeShape = {
 /**
  * A seeded random programme with whole-number costs and values (so every sum is exact and
  * optima compare exactly across engines). Values rise with cost with diminishing returns and
- * noise, as in notes/solver-measurements.md; zero costs and zero values occur on purpose.
+ * noise, like the benchmark's (bench/generateBenchProgramme.ts); zero costs and zero values occur on purpose.
  */
 export function randomProgramme(seed: number, shape: Partial<RandomProgrammeShape> = {}): Programme {
   const s = { ...DEFAULT_SHAPE, ...shape };

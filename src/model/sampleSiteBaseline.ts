@@ -16,8 +16,8 @@ export interface SampledBaseline {
 
 /**
  * One draw of a site's expected crashes per year, by its baseline method (see
- * BASELINE_SAMPLING_RULE). The seam for other methods: an Empirical Bayes baseline would draw from
- * its own gamma posterior here; until it carries one it is held fixed (`sampled: false`).
+ * BASELINE_SAMPLING_RULE). Other methods (Empirical Bayes) are held at their point estimate
+ * (`sampled: false`).
  * Posterior: with n ~ Poisson(rate × T) and prior ∝ 1/rate, rate | n ~ Gamma(n, T)
  * (conjugate gamma–Poisson update, e.g. Gelman et al., Bayesian Data Analysis, 3rd ed., §2.6).
  */

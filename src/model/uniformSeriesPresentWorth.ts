@@ -1,3 +1,5 @@
+import { singlePaymentPresentWorth } from "./singlePaymentPresentWorth.js";
+
 /**
  * Uniform-series present-worth factor (P/A, i, n) = ((1 + i)^n - 1) / (i (1 + i)^n):
  * what one unit received at the end of each of n years is worth today at rate i (a fraction).
@@ -8,5 +10,5 @@ export function uniformSeriesPresentWorth(rate: number, years: number): number {
   if (!(rate > -1)) throw new RangeError(`discount rate must be above -1, got ${rate}`);
   if (years <= 0) return 0;
   if (Math.abs(rate) < 1e-12) return years;
-  return (1 - Math.pow(1 + rate, -years)) / rate;
+  return (1 - singlePaymentPresentWorth(rate, years)) / rate;
 }

@@ -1,0 +1,33 @@
+import { describe, expect, it } from "vitest";
+import { runCaptured } from "./captureIo.js";
+
+// Option values a programme manager might plausibly mistype; each must be refused with exit 2,
+// a message naming the option, and nothing on stdout.
+describe("option values on the command line", () => {
+  it("--budget 4,5M is refused (a decimal comma), not read as 45 million", async () => {
+    const run = await runCaptured(["plan", "scenarios/demo.yaml", "--budget", "4,5M", "--format", "json"]);
+    expect(run.code).toBe(2);
+    expect(run.stdout).toBe("");
+    expect(run.stderr).toMatch(/^error: --budget: '4,5M' is not an amount \(write decimals with a point/);
+  });
+
+  it("compare --budget 5M,9.7M says to give --budget twice", async () => {
+    const run = await runCaptured(["compare", "scenarios/demo.yaml", "--budget", "5M,9.7M"]);
+    expect(run.code).toBe(2);
+    expect(run.stderr).toContain("--budget 5M --budget 9.7M");
+  });
+
+  it("--budget -1M says an amount cannot be negative", async () => {
+    const run = await runCaptured(["plan", "scenarios/demo.yaml", "--budget=-1M"]);
+    expect(run.code).toBe(2);
+    expect(run.stderr).toContain("cannot be negative");
+  });
+
+  it("whole-number options take plain digits only (not 1e1, 0x10 or an empty value)", async () => {
+    for (const steps of ["1e1", "0x10", "", "2.5"]) {
+      const run = await runCaptured(["frontier", "scenarios/demo.yaml", "--steps", steps]);
+      expect(run.code, `--steps '${steps}'`).toBe(2);
+      expect(run.stderr).toMatch(/^error: --steps: /);
+    }
+  });
+});

@@ -7,6 +7,7 @@ import { InputError } from "../../io/InputError.js";
 import { readCrashCsv } from "../../io/readCrashCsv.js";
 import { readCrashMapping } from "../../io/readCrashMapping.js";
 import { readSitesGeojson } from "../../io/readSitesGeojson.js";
+import { checkOutputTarget } from "../../io/writeOutputFile.js";
 import { writeOutputFiles } from "../../io/writeOutputFiles.js";
 import { crashQualityText } from "../../report/crashQualityText.js";
 import { sitesYaml } from "../../report/sitesYaml.js";
@@ -43,6 +44,10 @@ export function registerTallyCommand(program: Command, io: CliIo): void {
       const window = options.window === undefined ? undefined : parseWindow(options.window);
       const intersectionRadiusM = parseMetres("--radius", options.radius);
       const segmentBufferM = parseMetres("--buffer", options.buffer);
+      const qualityFile = `${options.out}.quality.txt`;
+      // Checked before reading, so a refusal costs nothing on a large crash file.
+      checkOutputTarget(options.out, options.force === true);
+      checkOutputTarget(qualityFile, options.force === true);
       const mapping = options.mapping === undefined ? DEFAULT_CRASH_MAPPING : readCrashMapping(options.mapping);
       const sites = readSitesGeojson(options.sites);
       const rows = readCrashCsv(options.crashes, mapping);
@@ -50,7 +55,6 @@ export function registerTallyCommand(program: Command, io: CliIo): void {
       const inputs = { crashes: options.crashes, sites: options.sites };
       const provenance = `Written by averta tally from ${basename(options.crashes)} and ${basename(options.sites)} (radius ${intersectionRadiusM} m, buffer ${segmentBufferM} m).`;
       const report = crashQualityText(quality, inputs);
-      const qualityFile = `${options.out}.quality.txt`;
       writeOutputFiles([{ path: options.out, content: sitesYaml(tallied, quality.window, provenance) }, { path: qualityFile, content: report }], options.force === true);
       io.stderr(crashQualityText(quality, inputs, LISTED_ON_TERMINAL));
       io.stderr(`wrote ${options.out} (${tallied.length} sites) and ${qualityFile}\n`);

@@ -1,7 +1,7 @@
 import type { Command } from "commander";
 import { basename } from "node:path";
 import { DEFAULT_ASSIGN_OPTIONS } from "../../geo/assignCrashes.js";
-import { tallyNetwork, type CrashWindow } from "../../geo/tallyNetwork.js";
+import { tallyNetwork, type CrashDataQuality, type CrashWindow } from "../../geo/tallyNetwork.js";
 import { DEFAULT_CRASH_MAPPING } from "../../io/CrashMapping.js";
 import { InputError } from "../../io/InputError.js";
 import { readCrashCsv } from "../../io/readCrashCsv.js";
@@ -55,10 +55,26 @@ export function registerTallyCommand(program: Command, io: CliIo): void {
       const inputs = { crashes: options.crashes, sites: options.sites };
       const provenance = `Written by averta tally from ${basename(options.crashes)} and ${basename(options.sites)} (radius ${intersectionRadiusM} m, buffer ${segmentBufferM} m).`;
       const report = crashQualityText(quality, inputs);
+      if (quality.rowsRead > 0 && quality.assigned === 0) {
+        // Every count would be zero: almost always a wrong column mapping, swapped coordinates,
+        // a window that misses the data, or files from two different places. Write nothing.
+        io.stderr(crashQualityText(quality, inputs, LISTED_ON_TERMINAL));
+        throw new InputError([{ code: "nothing-assigned", file: options.crashes, message: noneAssigned(quality), hint: "check the --mapping columns (latitude and longitude not swapped or mis-mapped), --window, and that --crashes and --sites cover the same area; nothing was written" }]);
+      }
       writeOutputFiles([{ path: options.out, content: sitesYaml(tallied, quality.window, provenance) }, { path: qualityFile, content: report }], options.force === true);
       io.stderr(crashQualityText(quality, inputs, LISTED_ON_TERMINAL));
       io.stderr(`wrote ${options.out} (${tallied.length} sites) and ${qualityFile}\n`);
     });
+}
+
+/** Where the rows went when none reached a site, in plain words. */
+function noneAssigned(quality: CrashDataQuality): string {
+  const reasons = Object.entries(quality.rejectedByReason).filter(([, count]) => count > 0).map(([reason, count]) => `${count} ${reason}`);
+  const parts = [
+    quality.unassigned > 0 ? `${quality.unassigned} unassigned (${quality.outsideExtent} outside the sites' extent)` : undefined,
+    reasons.length > 0 ? `${quality.rejected.length} rejected (${reasons.join(", ")})` : undefined,
+  ].filter((part) => part !== undefined);
+  return `none of the ${quality.rowsRead} crash rows was assigned to a site: ${parts.join("; ")}`;
 }
 
 function parseWindow(text: string): CrashWindow {

@@ -31,3 +31,34 @@ describe("option values on the command line", () => {
     }
   });
 });
+
+describe("frontier budget range", () => {
+  it("--from at or above the full-funding cost, without --to, is refused instead of repeating one level", async () => {
+    const run = await runCaptured(["frontier", "scenarios/demo.yaml", "--from", "50M", "--steps", "2", "--format", "json"]);
+    expect(run.code).toBe(2);
+    expect(run.stdout).toBe("");
+    expect(run.stderr).toMatch(/^error: --from: 50,000,000 is at or above/);
+  });
+
+  it("--to equal to --from is refused, as --to below --from is", async () => {
+    for (const to of ["5M", "1M"]) {
+      const run = await runCaptured(["frontier", "scenarios/demo.yaml", "--from", "5M", "--to", to]);
+      expect(run.code, `--to ${to}`).toBe(2);
+      expect(run.stderr).toMatch(/^error: --to: .* is not above --from 5,000,000/);
+    }
+  });
+});
+
+describe("no command", () => {
+  it("averta with no command prints the help on stderr and exits 2 (a usage mistake); --help exits 0", async () => {
+    const bare = await runCaptured([]);
+    expect(bare.code).toBe(2);
+    expect(bare.stdout).toBe("");
+    expect(bare.stderr).toContain("Usage: averta");
+    const help = await runCaptured(["--help"]);
+    expect(help.code).toBe(0);
+    expect(help.stdout).toContain("Usage: averta");
+    const helpCommand = await runCaptured(["help", "plan"]);
+    expect(helpCommand.code).toBe(0);
+  });
+});

@@ -9,6 +9,7 @@ import { checkDistinctOutputs, checkOutputTarget, writeOutputFile } from "../../
 import { frontierCsv } from "../../report/frontierCsv.js";
 import { frontierJson } from "../../report/frontierJson.js";
 import { frontierSvg } from "../../report/frontierSvg.js";
+import { formatMoney } from "../../report/formatNumber.js";
 import { frontierTable, type FrontierContext } from "../../report/frontierTable.js";
 import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
@@ -54,9 +55,13 @@ export function registerFrontierCommand(program: Command, io: CliIo): void {
       if (options.chart !== undefined) checkOutputTarget(options.chart, force, "--chart");
       const { scenario } = loadScenario(file);
       const prepared = preparePlan(scenario);
-      const to = options.to === undefined ? Math.max(from, fullFundingCost(prepared)) : parseAmountOption("--to", options.to);
-      if (to < from) {
-        throw new InputError([{ code: "bad-option", file: "--to", message: `${to} is below --from ${from}`, hint: "give --to an amount at least --from" }]);
+      const fullCost = fullFundingCost(prepared);
+      if (options.to === undefined && from >= fullCost) {
+        throw new InputError([{ code: "bad-option", file: "--from", message: `${formatMoney(from)} is at or above ${formatMoney(fullCost)}, the cost of funding every site's best alternative, so every level would be the same`, hint: "give a lower --from, or --to as well" }]);
+      }
+      const to = options.to === undefined ? fullCost : parseAmountOption("--to", options.to);
+      if (to <= from) {
+        throw new InputError([{ code: "bad-option", file: "--to", message: `${formatMoney(to)} is not above --from ${formatMoney(from)}`, hint: "give --to a larger amount than --from, e.g. --from 1M --to 5M" }]);
       }
       const frontier = await budgetFrontier(prepared, budgetLevels(from, to, steps), { engine });
       const summary = summariseFrontier(frontier);

@@ -62,3 +62,18 @@ describe("no command", () => {
     expect(helpCommand.code).toBe(0);
   });
 });
+
+describe("input paths on the command line", () => {
+  it("a folder given as the GeoJSON site map is not called a .yaml file", async () => {
+    const run = await runCaptured(["tally", "--crashes", "scenarios/vellmar-crashes.csv", "--sites", "scenarios", "--out", "never-written.yaml"]);
+    expect(run.code).toBe(2);
+    expect(run.stderr).toMatch(/^error: scenarios: is a folder, not a file/);
+    expect(run.stderr).not.toContain(".yaml file");
+  });
+
+  it("a missing scenario named on the command line is not blamed on paths inside a scenario", async () => {
+    const run = await runCaptured(["plan", "scenarios/no-such.yaml"]);
+    expect(run.code).toBe(2);
+    expect(run.stderr).toMatch(/^error: scenarios\/no-such\.yaml: file not found \(check the spelling/);
+  });
+});

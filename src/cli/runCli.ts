@@ -51,7 +51,9 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<number
       return EXIT_BAD_INPUT;
     }
     if (error instanceof CommanderError) {
-      if (error.code === "commander.helpDisplayed" || error.code === "commander.version" || error.code === "commander.help") return EXIT_OK;
+      if (error.code === "commander.helpDisplayed" || error.code === "commander.version") return EXIT_OK;
+      // Help shown because no command was given is a usage mistake (commander's exit code is then non-zero).
+      if (error.code === "commander.help") return error.exitCode === 0 ? EXIT_OK : EXIT_BAD_INPUT;
       return EXIT_BAD_INPUT; // commander has already printed the usage problem
     }
     const message = error instanceof Error ? error.message : String(error);

@@ -4,7 +4,7 @@ import { formatFieldPath } from "./fieldPath.js";
 import type { InputProblem } from "./InputError.js";
 import type { LoadedCatalogue } from "./loadCatalogue.js";
 import type { RawScenario } from "./loadScenario.js";
-import { parseAmount } from "./parseAmount.js";
+import { amountHint, parseAmount } from "./parseAmount.js";
 import type { PathSegment, YamlSource } from "./readYamlFile.js";
 
 /**
@@ -140,5 +140,5 @@ function checkAmount(
   path: PathSegment[],
   problem: (code: string, path: PathSegment[], message: string, hint?: string) => void,
 ): void {
-  if (parseAmount(value) === undefined) problem("bad-amount", path, `'${String(value)}' is not an amount`, "write 4500000, 4.5M or 750k");
+  if (parseAmount(value) === undefined) problem("bad-amount", path, `'${String(value)}' is not an amount`, typeof value === "string" ? amountHint(value) : "write 4500000, 4.5M or 750k");
 }

@@ -107,7 +107,7 @@ function readUtf8(file: string, label: string): string {
   try {
     const stats = statSync(file);
     if (stats.isDirectory()) {
-      throw new InputError([{ code: "not-a-file", file: label, message: "is a folder, not a file", hint: "name a .yaml file" }]);
+      throw new InputError([{ code: "not-a-file", file: label, message: "is a folder, not a file", hint: "name a file inside it" }]);
     }
     if (stats.size > MAX_INPUT_BYTES) {
       throw new InputError([
@@ -128,7 +128,7 @@ function readUtf8(file: string, label: string): string {
         code: "missing-file",
         file: label,
         message: code === "ENOENT" ? "file not found" : `cannot be read (${code ?? "unknown error"})`,
-        hint: code === "ENOENT" ? "check the path; relative paths in a scenario are relative to the scenario file" : "check its permissions",
+        hint: code === "ENOENT" ? "check the spelling and the folder you run averta from" : "check its permissions",
       },
     ]);
   }

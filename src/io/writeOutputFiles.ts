@@ -1,18 +1,21 @@
-import { existsSync } from "node:fs";
-import { InputError } from "./InputError.js";
-import { writeOutputFile } from "./writeOutputFile.js";
+import { InputError, type InputProblem } from "./InputError.js";
+import { checkOutputTarget, writeOutputFile } from "./writeOutputFile.js";
 
 /**
- * Writes several files that belong together (e.g. an output and its report). Without `force`,
- * any existing target stops the run before anything is written, so a refusal never leaves half
- * of the set behind.
+ * Writes several files that belong together (e.g. an output and its report). Every target is
+ * checked before any is written, and every refusal is listed, so a refusal never leaves half of
+ * the set behind.
  */
-export function writeOutputFiles(files: readonly { readonly path: string; readonly content: string }[], force: boolean): void {
-  if (!force) {
-    const existing = files.filter((file) => existsSync(file.path));
-    if (existing.length > 0) {
-      throw new InputError(existing.map((file) => ({ code: "exists", file: file.path, message: "already exists and was left untouched", hint: "choose another --out path, or add --force to replace it" })));
+export function writeOutputFiles(files: readonly { readonly path: string; readonly content: string; readonly option?: string }[], force: boolean): void {
+  const problems: InputProblem[] = [];
+  for (const file of files) {
+    try {
+      checkOutputTarget(file.path, force, file.option);
+    } catch (error) {
+      if (!(error instanceof InputError)) throw error;
+      problems.push(...error.problems);
     }
   }
-  for (const file of files) writeOutputFile(file.path, file.content, force);
+  if (problems.length > 0) throw new InputError(problems);
+  for (const file of files) writeOutputFile(file.path, file.content, force, file.option);
 }

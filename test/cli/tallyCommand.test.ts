@@ -73,6 +73,23 @@ describe("averta tally on the demo network", () => {
     expect(io.err.join("")).toMatch(/bad\.geojson:4:\d+: features\[0\]\.properties.*district/);
     expect(existsSync(join(folder, "never.yaml"))).toBe(false);
   });
+  it("refuses, writing nothing, when swapped coordinate columns leave every crash off the network", async () => {
+    const mapping = join(folder, "swapped.yaml");
+    writeFileSync(mapping, "columns: { latitude: longitude, longitude: latitude }\n");
+    const target = join(folder, "swapped-sites.yaml");
+    const io = capture();
+    expect(await runCli(["tally", "--crashes", crashes, "--sites", sites, "--window", "2021-2025", "--mapping", mapping, "--out", target], io)).toBe(2);
+    expect(io.err.join("")).toMatch(/error: scenarios\/vellmar-crashes\.csv: none of the 1511 crash rows was assigned to a site/);
+    expect(existsSync(target)).toBe(false);
+    expect(existsSync(`${target}.quality.txt`)).toBe(false);
+  });
+  it("refuses, writing nothing, when --window misses every crash", async () => {
+    const target = join(folder, "empty-window.yaml");
+    const io = capture();
+    expect(await runCli(["tally", "--crashes", crashes, "--sites", sites, "--window", "2030-2031", "--out", target], io)).toBe(2);
+    expect(io.err.join("")).toMatch(/outside-window/);
+    expect(existsSync(target)).toBe(false);
+  });
   it("rejects a malformed --window", async () => {
     const io = capture();
     expect(await runCli(["tally", "--crashes", crashes, "--sites", sites, "--window", "2025-2021"], io)).toBe(2);

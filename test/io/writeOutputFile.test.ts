@@ -98,6 +98,28 @@ describe("writeOutputFile", () => {
     expect(fs.readdirSync(folder)).toEqual(["plan.json"]);
   });
 
+  it("a folder the user may not write to is bad input naming the path, not an internal fault", () => {
+    const folder = freshFolder();
+    vi.mocked(fs.writeSync).mockImplementationOnce(() => {
+      throw Object.assign(new Error("permission denied"), { code: "EACCES" });
+    });
+    let caught: unknown;
+    try {
+      writeOutputFile(join(folder, "chart.svg"), "<svg/>", false, "--chart");
+    } catch (error) {
+      caught = error;
+    }
+    expect(caught).toBeInstanceOf(InputError);
+    expect((caught as InputError).code).toBe("cannot-write");
+    expect((caught as InputError).problems[0]!.hint).toContain("--chart");
+    expect(fs.readdirSync(folder)).toEqual([]);
+  });
+
+  it("an empty file name is bad input, not a failed rename", () => {
+    expect(() => writeOutputFile("", "{}", false)).toThrow(InputError);
+    expect(() => writeOutputFile("  ", "{}", false)).toThrow(InputError);
+  });
+
   it("refuses a folder that does not exist, as bad input", () => {
     expect(() => writeOutputFile(join(scratch, "no-such-folder", "plan.json"), "{}", false)).toThrow(InputError);
   });

@@ -4,6 +4,7 @@ import { planProgramme } from "../../analysis/planProgramme.js";
 import { preparePlan } from "../../analysis/preparePlan.js";
 import { InputError } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
+import { checkOutputTarget } from "../../io/writeOutputFile.js";
 import { compareJson } from "../../report/compareJson.js";
 import { compareTable, type CompareLabels } from "../../report/compareTable.js";
 import { formatMoney } from "../../report/formatNumber.js";
@@ -42,6 +43,7 @@ export function registerCompareCommand(program: Command, io: CliIo): void {
       if (other !== undefined && budgets.length > 1) {
         throw new InputError([{ code: "bad-option", file: "--budget", message: `compare with two scenarios takes at most one budget, got ${budgets.length}`, hint: "drop --budget to use each scenario's own budget" }]);
       }
+      if (options.out !== undefined) checkOutputTarget(options.out, options.force === true);
       const scenarioA = loadScenario(file).scenario;
       const scenarioB = other === undefined ? scenarioA : loadScenario(other).scenario;
       const preparedA = preparePlan(scenarioA);

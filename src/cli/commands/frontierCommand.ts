@@ -3,13 +3,13 @@ import { budgetFrontier, budgetLevels } from "../../analysis/budgetFrontier.js";
 import { fullFundingCost } from "../../analysis/fullFundingCost.js";
 import { preparePlan } from "../../analysis/preparePlan.js";
 import { summariseFrontier } from "../../analysis/summariseFrontier.js";
-import { assertOutputWritable } from "../../io/assertOutputWritable.js";
 import { InputError } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
-import { writeOutputFile } from "../../io/writeOutputFile.js";
+import { checkDistinctOutputs, checkOutputTarget, writeOutputFile } from "../../io/writeOutputFile.js";
 import { frontierCsv } from "../../report/frontierCsv.js";
 import { frontierJson } from "../../report/frontierJson.js";
 import { frontierSvg } from "../../report/frontierSvg.js";
+import { formatMoney } from "../../report/formatNumber.js";
 import { frontierTable, type FrontierContext } from "../../report/frontierTable.js";
 import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
@@ -47,13 +47,21 @@ export function registerFrontierCommand(program: Command, io: CliIo): void {
       const steps = parseIntegerOption("--steps", options.steps, 1, 500);
       const from = options.from === undefined ? 0 : parseAmountOption("--from", options.from);
       const force = options.force === true;
-      if (options.out !== undefined) assertOutputWritable(options.out, force, "--out");
-      if (options.chart !== undefined) assertOutputWritable(options.chart, force, "--chart");
+      if (options.chart !== undefined && !options.chart.toLowerCase().endsWith(".svg")) {
+        throw new InputError([{ code: "bad-option", file: "--chart", message: `'${options.chart}' is not an .svg file name`, hint: "the chart is SVG; give a file name ending in .svg" }]);
+      }
+      checkDistinctOutputs([{ option: "--out", file: options.out }, { option: "--chart", file: options.chart }]);
+      if (options.out !== undefined) checkOutputTarget(options.out, force);
+      if (options.chart !== undefined) checkOutputTarget(options.chart, force, "--chart");
       const { scenario } = loadScenario(file);
       const prepared = preparePlan(scenario);
-      const to = options.to === undefined ? Math.max(from, fullFundingCost(prepared)) : parseAmountOption("--to", options.to);
-      if (to < from) {
-        throw new InputError([{ code: "bad-option", file: "--to", message: `${to} is below --from ${from}`, hint: "give --to an amount at least --from" }]);
+      const fullCost = fullFundingCost(prepared);
+      if (options.to === undefined && from >= fullCost) {
+        throw new InputError([{ code: "bad-option", file: "--from", message: `${formatMoney(from)} is at or above ${formatMoney(fullCost)}, the cost of funding every site's best alternative, so every level would be the same`, hint: "give a lower --from, or --to as well" }]);
+      }
+      const to = options.to === undefined ? fullCost : parseAmountOption("--to", options.to);
+      if (to <= from) {
+        throw new InputError([{ code: "bad-option", file: "--to", message: `${formatMoney(to)} is not above --from ${formatMoney(from)}`, hint: "give --to a larger amount than --from, e.g. --from 1M --to 5M" }]);
       }
       const frontier = await budgetFrontier(prepared, budgetLevels(from, to, steps), { engine });
       const summary = summariseFrontier(frontier);
@@ -65,7 +73,7 @@ export function registerFrontierCommand(program: Command, io: CliIo): void {
             ? frontierCsv(summary, scenario.currency)
             : frontierTable(summary, context);
       if (options.chart !== undefined) {
-        writeOutputFile(options.chart, frontierSvg(summary, context), force);
+        writeOutputFile(options.chart, frontierSvg(summary, context), force, "--chart");
         io.stderr(`wrote ${options.chart}\n`);
       }
       emitOutput(io, content, options.out, force);

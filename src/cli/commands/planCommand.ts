@@ -4,6 +4,7 @@ import { planProgramme } from "../../analysis/planProgramme.js";
 import { preparePlan } from "../../analysis/preparePlan.js";
 import { formatProblem } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
+import { checkOutputTarget } from "../../io/writeOutputFile.js";
 import type { Objective } from "../../model/types.js";
 import { planCsv } from "../../report/planCsv.js";
 import { planJson } from "../../report/planJson.js";
@@ -44,6 +45,7 @@ export function registerPlanCommand(program: Command, io: CliIo): void {
       const engine = parseChoiceOption("--engine", options.engine, ENGINES);
       const objective = options.objective === undefined ? undefined : parseChoiceOption<Objective>("--objective", options.objective, ["ksi", "benefit"]);
       const budget = options.budget === undefined ? undefined : parseAmountOption("--budget", options.budget);
+      if (options.out !== undefined) checkOutputTarget(options.out, options.force === true);
       const { scenario, warnings } = loadScenario(file);
       if (warnings.length > 0) io.stderr(`note: ${warnings.length} warning(s) about the input; 'averta check ${file}' lists them\n`);
       for (const warning of warnings) if (warning.code === "eb-fallback") io.stderr(`warning: ${formatProblem(warning)}\n`);

@@ -7,9 +7,9 @@ import type { PlanResult } from "../../analysis/planProgramme.js";
 import { preparePlan, type PreparedPlan } from "../../analysis/preparePlan.js";
 import { analyseUncertainty } from "../../analysis/uncertainty/analyseUncertainty.js";
 import { oneAtATimeSensitivity } from "../../analysis/uncertainty/oneAtATimeSensitivity.js";
-import { formatProblem, InputError } from "../../io/InputError.js";
+import { formatProblem } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
-import { checkOutputTarget, writeOutputFile } from "../../io/writeOutputFile.js";
+import { checkDistinctOutputs, checkOutputTarget, writeOutputFile } from "../../io/writeOutputFile.js";
 import type { ReportUncertainty } from "../../report/html/ReportInput.js";
 import { reportHtml } from "../../report/html/reportHtml.js";
 import { planCsv } from "../../report/planCsv.js";
@@ -52,12 +52,10 @@ export function registerReportCommand(program: Command, io: CliIo): void {
       const drawOptions = parseDrawOptions(options, 0);
       const requestedBudget = options.budget === undefined ? undefined : parseAmountOption("--budget", options.budget);
       const force = options.force === true;
-      if (options.csv !== undefined && options.csv === options.out) {
-        throw new InputError([{ code: "bad-option", file: "--csv", message: "names the same file as --out", hint: "give the CSV its own file name" }]);
-      }
+      checkDistinctOutputs([{ option: "--out", file: options.out }, { option: "--csv", file: options.csv }]);
       // Check every target before solving, so a refusal costs nothing and no file is half-written.
       checkOutputTarget(options.out, force);
-      if (options.csv !== undefined) checkOutputTarget(options.csv, force);
+      if (options.csv !== undefined) checkOutputTarget(options.csv, force, "--csv");
 
       const { scenario, warnings } = loadScenario(file);
       const budget = requestedBudget ?? scenario.budget;
@@ -84,7 +82,7 @@ export function registerReportCommand(program: Command, io: CliIo): void {
       writeOutputFile(options.out, html, force);
       io.stderr(`wrote ${options.out}\n`);
       if (options.csv !== undefined) {
-        writeOutputFile(options.csv, planCsv(plan), force);
+        writeOutputFile(options.csv, planCsv(plan), force, "--csv");
         io.stderr(`wrote ${options.csv}\n`);
       }
     });

@@ -1,5 +1,6 @@
 import type { Command } from "commander";
 import { loadScenario } from "../../io/loadScenario.js";
+import { checkOutputTarget } from "../../io/writeOutputFile.js";
 import { screenSites } from "../../model/screenSites.js";
 import { screenCsv } from "../../report/screenCsv.js";
 import { screenJson } from "../../report/screenJson.js";
@@ -30,6 +31,7 @@ export function registerScreenCommand(program: Command, io: CliIo): void {
     .action((file: string, options: ScreenOptions) => {
       const format = parseChoiceOption("--format", options.format, SCREEN_FORMATS);
       const top = parseIntegerOption("--top", options.top, 1, 100000);
+      if (options.out !== undefined) checkOutputTarget(options.out, options.force === true);
       const { scenario } = loadScenario(file);
       const screening = screenSites(scenario, top);
       const content = format === "json" ? JSON.stringify(screenJson(screening, scenario.name), null, 2) + "\n" : format === "csv" ? screenCsv(screening) : screenTable(screening, scenario.name, top);

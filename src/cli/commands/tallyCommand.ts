@@ -1,12 +1,13 @@
 import type { Command } from "commander";
 import { basename } from "node:path";
 import { DEFAULT_ASSIGN_OPTIONS } from "../../geo/assignCrashes.js";
-import { tallyNetwork, type CrashWindow } from "../../geo/tallyNetwork.js";
+import { tallyNetwork, type CrashDataQuality, type CrashWindow } from "../../geo/tallyNetwork.js";
 import { DEFAULT_CRASH_MAPPING } from "../../io/CrashMapping.js";
 import { InputError } from "../../io/InputError.js";
 import { readCrashCsv } from "../../io/readCrashCsv.js";
 import { readCrashMapping } from "../../io/readCrashMapping.js";
 import { readSitesGeojson } from "../../io/readSitesGeojson.js";
+import { checkOutputTarget } from "../../io/writeOutputFile.js";
 import { writeOutputFiles } from "../../io/writeOutputFiles.js";
 import { crashQualityText } from "../../report/crashQualityText.js";
 import { sitesYaml } from "../../report/sitesYaml.js";
@@ -43,6 +44,10 @@ export function registerTallyCommand(program: Command, io: CliIo): void {
       const window = options.window === undefined ? undefined : parseWindow(options.window);
       const intersectionRadiusM = parseMetres("--radius", options.radius);
       const segmentBufferM = parseMetres("--buffer", options.buffer);
+      const qualityFile = `${options.out}.quality.txt`;
+      // Checked before reading, so a refusal costs nothing on a large crash file.
+      checkOutputTarget(options.out, options.force === true);
+      checkOutputTarget(qualityFile, options.force === true);
       const mapping = options.mapping === undefined ? DEFAULT_CRASH_MAPPING : readCrashMapping(options.mapping);
       const sites = readSitesGeojson(options.sites);
       const rows = readCrashCsv(options.crashes, mapping);
@@ -50,11 +55,26 @@ export function registerTallyCommand(program: Command, io: CliIo): void {
       const inputs = { crashes: options.crashes, sites: options.sites };
       const provenance = `Written by averta tally from ${basename(options.crashes)} and ${basename(options.sites)} (radius ${intersectionRadiusM} m, buffer ${segmentBufferM} m).`;
       const report = crashQualityText(quality, inputs);
-      const qualityFile = `${options.out}.quality.txt`;
+      if (quality.rowsRead > 0 && quality.assigned === 0) {
+        // Every count would be zero: almost always a wrong column mapping, swapped coordinates,
+        // a window that misses the data, or files from two different places. Write nothing.
+        io.stderr(crashQualityText(quality, inputs, LISTED_ON_TERMINAL));
+        throw new InputError([{ code: "nothing-assigned", file: options.crashes, message: noneAssigned(quality), hint: "check the --mapping columns (latitude and longitude not swapped or mis-mapped), --window, and that --crashes and --sites cover the same area; nothing was written" }]);
+      }
       writeOutputFiles([{ path: options.out, content: sitesYaml(tallied, quality.window, provenance) }, { path: qualityFile, content: report }], options.force === true);
       io.stderr(crashQualityText(quality, inputs, LISTED_ON_TERMINAL));
       io.stderr(`wrote ${options.out} (${tallied.length} sites) and ${qualityFile}\n`);
     });
+}
+
+/** Where the rows went when none reached a site, in plain words. */
+function noneAssigned(quality: CrashDataQuality): string {
+  const reasons = Object.entries(quality.rejectedByReason).filter(([, count]) => count > 0).map(([reason, count]) => `${count} ${reason}`);
+  const parts = [
+    quality.unassigned > 0 ? `${quality.unassigned} unassigned (${quality.outsideExtent} outside the sites' extent)` : undefined,
+    reasons.length > 0 ? `${quality.rejected.length} rejected (${reasons.join(", ")})` : undefined,
+  ].filter((part) => part !== undefined);
+  return `none of the ${quality.rowsRead} crash rows was assigned to a site: ${parts.join("; ")}`;
 }
 
 function parseWindow(text: string): CrashWindow {

@@ -3,9 +3,8 @@ import { preparePlan } from "../../analysis/preparePlan.js";
 import { analyseUncertainty } from "../../analysis/uncertainty/analyseUncertainty.js";
 import { oneAtATimeSensitivity } from "../../analysis/uncertainty/oneAtATimeSensitivity.js";
 import { InputError } from "../../io/InputError.js";
-import { refuseExistingOutput } from "../../io/refuseExistingOutput.js";
 import { loadScenario } from "../../io/loadScenario.js";
-import { writeOutputFile } from "../../io/writeOutputFile.js";
+import { checkDistinctOutputs, checkOutputTarget, writeOutputFile } from "../../io/writeOutputFile.js";
 import { progressBar } from "../../report/progressBar.js";
 import { tornadoSvg } from "../../report/tornadoSvg.js";
 import { uncertaintyJson } from "../../report/uncertaintyJson.js";
@@ -51,8 +50,9 @@ export function registerUncertaintyCommand(program: Command, io: CliIo): void {
       if (options.tornado !== undefined && !options.tornado.toLowerCase().endsWith(".svg")) {
         throw new InputError([{ code: "bad-option", file: "--tornado", message: `'${options.tornado}' is not an .svg file name`, hint: "give a file name ending in .svg" }]);
       }
-      refuseExistingOutput("--out", options.out, force);
-      refuseExistingOutput("--tornado", options.tornado, force);
+      checkDistinctOutputs([{ option: "--out", file: options.out }, { option: "--tornado", file: options.tornado }]);
+      if (options.out !== undefined) checkOutputTarget(options.out, force);
+      if (options.tornado !== undefined) checkOutputTarget(options.tornado, force, "--tornado");
       const { scenario } = loadScenario(file);
       const prepared = preparePlan(scenario);
       const solveOptions = { engine };
@@ -69,7 +69,7 @@ export function registerUncertaintyCommand(program: Command, io: CliIo): void {
       const sensitivity = await oneAtATimeSensitivity(result.plan, solveOptions);
       const content = format === "json" ? JSON.stringify(uncertaintyJson(result, sensitivity), null, 2) + "\n" : uncertaintyTable(result, sensitivity);
       if (options.tornado !== undefined) {
-        writeOutputFile(options.tornado, tornadoSvg(sensitivity, `${scenario.name}: one-at-a-time sensitivity`), force);
+        writeOutputFile(options.tornado, tornadoSvg(sensitivity, `${scenario.name}: one-at-a-time sensitivity`), force, "--tornado");
         io.stderr(`wrote ${options.tornado}\n`);
       }
       emitOutput(io, content, options.out, force);

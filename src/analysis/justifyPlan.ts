@@ -150,8 +150,11 @@ function budgetExplanation(threshold: EntryThreshold | null, objective: "ksi" | 
   if (threshold === null) return "the budget, or a policy rule, left it out (no threshold: λ is unknown when rules bind through side constraints)";
   if (threshold.costCut <= 0) return "the budget ran out at the margin: past its LP threshold, but it does not fit the money left (an integer effect)";
   const what = objective === "ksi" ? "KSI crashes" : "benefit PV";
+  const extra = objective === "ksi" ? threshold.extraValueNeeded.toFixed(2) : Math.round(threshold.extraValueNeeded).toLocaleString("en-US");
+  // A threshold at or below zero means no price cut alone brings it in.
+  if (threshold.costThreshold <= 0) return `the budget ran out: ${threshold.treatments.join(" + ")} would enter only if it avoided at least ${extra} more ${what} at its cost; no price cut alone is enough`;
   return (
     `the budget ran out: ${threshold.treatments.join(" + ")} would need to cost at most about ${Math.round(threshold.costThreshold).toLocaleString("en-US")} ` +
-    `(at least ${Math.round(threshold.costCut).toLocaleString("en-US")} cheaper), or to avoid at least ${objective === "ksi" ? threshold.extraValueNeeded.toFixed(2) : Math.round(threshold.extraValueNeeded).toLocaleString("en-US")} more ${what}, to enter`
+    `(at least ${Math.round(threshold.costCut).toLocaleString("en-US")} cheaper), or to avoid at least ${extra} more ${what}, to enter`
   );
 }

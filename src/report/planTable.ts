@@ -2,6 +2,7 @@ import Table from "cli-table3";
 import type { PlanResult } from "../analysis/planProgramme.js";
 import { CAUTIONS } from "./cautions.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
+import { hasList } from "./hasList.js";
 
 /** The funded list as a terminal table, with totals against the budget, any extra sections (before the cautions) and the cautions. */
 export function planTable(result: PlanResult, sections: readonly string[] = []): string {
@@ -43,9 +44,11 @@ export function planTable(result: PlanResult, sections: readonly string[] = []):
     `KSI avoided ${formatFixed(totals.ksiAvoided, 2)} over the analysis period (${formatFixed(totals.ksiAvoidedPerYear, 2)} a year at first); benefit PV ${formatMoney(totals.benefitPV)}; lifecycle cost PV ${formatMoney(totals.lifecycleCostPV)}`,
     ...(solution.diagnosis ? [`Why: ${solution.diagnosis}`] : []),
     "",
-    table.toString(),
+    hasList(result) ? table.toString() : "",
     result.funded.some((project) => project.entry.required) ? "* required by a must-fund rule" : "",
-    `Optimality: upper bound ${formatFixed(solution.bound, 3)}, gap ${solution.gap.toExponential(1)} (engine: ${solution.engine}).`,
+    hasList(result)
+      ? `Optimality: upper bound ${formatFixed(solution.bound, 3)}, gap ${solution.gap.toExponential(1)} (engine: ${solution.engine}).`
+      : `No list at this budget (status ${solution.status}, engine: ${solution.engine}).`,
     "",
     ...sections.flatMap((section) => [section, ""]),
     "Cautions:",

@@ -104,10 +104,28 @@ describe("averta plan on the demo", () => {
   it("must-fund items that alone exceed the budget are reported as infeasible with the shortfall", async () => {
     const { code, stdout } = await runCaptured(["plan", DEMO, "--budget", "10k", "--format", "json"]);
     expect(code).toBe(0);
-    const plan = JSON.parse(stdout) as PlanJson & { diagnosis?: string };
+    const plan = JSON.parse(stdout) as PlanJson & { diagnosis?: string; justification: unknown };
     expect(plan.status).toBe("infeasible");
     expect(plan.diagnosis).toMatch(/I-03/);
+    // With no list there is nothing to justify, and the table says so instead of printing empty sections.
+    expect(plan.justification).toBeNull();
+    const table = await runCaptured(["plan", DEMO, "--budget", "10k"]);
+    expect(table.stdout).toMatch(/No list at this budget \(status infeasible/);
+    expect(table.stdout).not.toMatch(/Why these projects|gap NaN/);
     expect(existsSync("plan.json")).toBe(false);
+  });
+});
+
+describe("averta plan's reasons for the sites left out", () => {
+  it("never asks for a price cut to zero or below: such a site needs more KSI avoided instead", async () => {
+    const { stdout } = await runCaptured(["plan", DEMO, "--format", "json"]);
+    const notFunded = (JSON.parse(stdout) as { justification: { notFunded: { threshold: { costThreshold: number } | null; explanation: string }[] } }).justification.notFunded;
+    const priceless = notFunded.filter((site) => site.threshold !== null && site.threshold.costThreshold <= 0);
+    expect(priceless.length).toBeGreaterThan(0); // C-07 on the demo
+    for (const site of priceless) {
+      expect(site.explanation).toMatch(/no price cut alone is enough/);
+      expect(site.explanation).not.toMatch(/cost at most about/);
+    }
   });
 });
 

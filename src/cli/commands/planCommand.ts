@@ -10,6 +10,7 @@ import { planCsv } from "../../report/planCsv.js";
 import { planJson } from "../../report/planJson.js";
 import { planTable } from "../../report/planTable.js";
 import { justificationJson } from "../../report/justificationJson.js";
+import { hasList } from "../../report/hasList.js";
 import { justificationTable } from "../../report/justificationTable.js";
 import type { EngineName } from "../../solver/index.js";
 import type { CliIo } from "../CliIo.js";
@@ -50,13 +51,14 @@ export function registerPlanCommand(program: Command, io: CliIo): void {
       if (warnings.length > 0) io.stderr(`note: ${warnings.length} warning(s) about the input; 'averta check ${file}' lists them\n`);
       for (const warning of warnings) if (warning.code === "eb-fallback") io.stderr(`warning: ${formatProblem(warning)}\n`);
       const result = await planProgramme(preparePlan(scenario, objective), budget ?? scenario.budget, { engine });
-      const planCase = format === "csv" ? undefined : casePlan(result);
+      // Without a list there is nothing to justify: the diagnosis says why.
+      const planCase = format === "csv" || !hasList(result) ? undefined : casePlan(result);
       const content =
         format === "json"
-          ? JSON.stringify({ ...planJson(result), justification: justificationJson(planCase!) }, null, 2) + "\n"
+          ? JSON.stringify({ ...planJson(result), justification: planCase ? justificationJson(planCase) : null }, null, 2) + "\n"
           : format === "csv"
             ? planCsv(result)
-            : planTable(result, [justificationTable(planCase!)]);
+            : planTable(result, planCase ? [justificationTable(planCase)] : []);
       emitOutput(io, content, options.out, options.force === true);
     });
 }

@@ -2,7 +2,7 @@ import { formatFixed, formatMoney } from "../formatNumber.js";
 import { escapeHtml } from "./escapeHtml.js";
 import { frontierChartSvg } from "./frontierChartSvg.js";
 import { frontierSliderData } from "./frontierSliderData.js";
-import { hasList } from "./hasList.js";
+import { hasList } from "../hasList.js";
 import type { ReportInput } from "./ReportInput.js";
 import { scriptJson } from "./scriptJson.js";
 

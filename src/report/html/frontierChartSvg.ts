@@ -2,7 +2,7 @@ import type { FrontierLevel } from "../../analysis/budgetFrontier.js";
 import { formatFixed, formatMoney } from "../formatNumber.js";
 import { compactAmount } from "./compactAmount.js";
 import { escapeHtml } from "./escapeHtml.js";
-import { hasList } from "./hasList.js";
+import { hasList } from "../hasList.js";
 import { niceTicks } from "../niceTicks.js";
 import { OKABE_ITO } from "./okabeIto.js";
 

@@ -1,6 +1,6 @@
 import type { FrontierLevel } from "../../analysis/budgetFrontier.js";
 import { totalsJson, type TotalsJson } from "../totalsJson.js";
-import { hasList } from "./hasList.js";
+import { hasList } from "../hasList.js";
 import { treatmentNames } from "./treatmentNames.js";
 import type { Scenario } from "../../model/types.js";
 

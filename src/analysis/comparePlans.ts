@@ -1,6 +1,7 @@
 import type { Alternative } from "../model/types.js";
 import type { FundedProject, PlanResult } from "./planProgramme.js";
 import type { ProgrammeTotals } from "./summariseSelection.js";
+import type { SolveStatus } from "../solver/index.js";
 
 /** A project as the comparison shows it. */
 export interface ComparedProject {
@@ -19,6 +20,12 @@ export interface ChangedTreatment {
   readonly after: ComparedProject;
 }
 
+/** How one side of a comparison was solved. */
+export interface ComparedSide {
+  readonly status: SolveStatus;
+  readonly diagnosis: string | null;
+}
+
 /** What changes from list A to list B. Deltas are B − A. */
 export interface PlanComparison {
   /** Funded in B, not in A (by site id). */
@@ -26,6 +33,9 @@ export interface PlanComparison {
   /** Funded in A, not in B. */
   readonly leaving: readonly ComparedProject[];
   readonly changed: readonly ChangedTreatment[];
+  /** Each side's solver status and, when it has no list, why (e.g. must-fund sites over the budget). */
+  readonly sideA: ComparedSide;
+  readonly sideB: ComparedSide;
   readonly totalsA: ProgrammeTotals;
   readonly totalsB: ProgrammeTotals;
   readonly delta: { readonly spend: number; readonly projects: number; readonly ksiAvoided: number; readonly benefitPV: number; readonly bcRatio: number };
@@ -53,6 +63,8 @@ export function comparePlans(a: PlanResult, b: PlanResult): PlanComparison {
     entering,
     leaving,
     changed,
+    sideA: side(a),
+    sideB: side(b),
     totalsA,
     totalsB,
     delta: {
@@ -63,6 +75,10 @@ export function comparePlans(a: PlanResult, b: PlanResult): PlanComparison {
       bcRatio: totalsB.bcRatio - totalsA.bcRatio,
     },
   };
+}
+
+function side(plan: PlanResult): ComparedSide {
+  return { status: plan.solution.status, diagnosis: plan.solution.diagnosis ?? null };
 }
 
 function compared(project: FundedProject): ComparedProject {

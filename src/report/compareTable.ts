@@ -20,6 +20,7 @@ export function compareTable(comparison: PlanComparison, labels: CompareLabels):
     style: { head: [], border: [] },
   } as ConstructorParameters<typeof Table>[0]);
   totals.push(
+    ["Status", comparison.sideA.status, comparison.sideB.status, ""],
     [`Spend (${labels.currency})`, formatMoney(totalsA.cost), formatMoney(totalsB.cost), signed(formatMoney(delta.spend), delta.spend)],
     ["Projects", String(totalsA.projects), String(totalsB.projects), signed(String(delta.projects), delta.projects)],
     ["KSI avoided", formatFixed(totalsA.ksiAvoided, 2), formatFixed(totalsB.ksiAvoided, 2), signed(formatFixed(delta.ksiAvoided, 2), delta.ksiAvoided)],
@@ -50,9 +51,12 @@ export function compareTable(comparison: PlanComparison, labels: CompareLabels):
     `What-if: A = ${labels.a}, B = ${labels.b}`,
     "",
     totals.toString(),
+    ...[["A", comparison.sideA] as const, ["B", comparison.sideB] as const]
+      .filter(([, side]) => side.diagnosis !== null)
+      .map(([name, side]) => `No list in ${name}: ${side.diagnosis}`),
     "",
-    ...section("Enter the list in B", comparison.entering.map(plain)),
-    ...section("Leave the list in B", comparison.leaving.map(plain)),
+    ...section("Entering the list in B", comparison.entering.map(plain)),
+    ...section("Leaving the list in B", comparison.leaving.map(plain)),
     ...section(
       "Change treatment (A → B)",
       comparison.changed.map((change) => ({

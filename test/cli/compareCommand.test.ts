@@ -56,4 +56,16 @@ describe("averta compare (smoke, demo scenario)", () => {
     expect(bad.code).toBe(2);
     expect(bad.stderr).toContain("'lots'");
   });
+
+  it("says when one side has no list, and why, instead of showing it as an empty list", async () => {
+    const table = await runCaptured(["compare", DEMO, "--budget", "0", "--budget", "5M"]);
+    expect(table.code).toBe(0);
+    expect(table.stdout).toMatch(/Status\s+│\s+infeasible\s+│\s+optimal/);
+    expect(table.stdout).toMatch(/No list in A: .*I-03/);
+    const json = JSON.parse((await runCaptured(["compare", DEMO, "--budget", "0", "--budget", "5M", "--format", "json"])).stdout);
+    expect(json.statusA).toBe("infeasible");
+    expect(json.statusB).toBe("optimal");
+    expect(json.diagnosisA).toMatch(/I-03/);
+    expect(json.diagnosisB).toBeUndefined();
+  });
 });

@@ -58,12 +58,16 @@ describe("averta tally on the demo network", () => {
     const io = capture();
     expect(await runCli(["tally", "--crashes", crashes, "--sites", sites, "--out", out], io)).toBe(2);
     expect(io.err.join("")).toMatch(/already exists/);
-    expect(await runCli(["tally", "--crashes", crashes, "--sites", sites, "--out", out, "--force"], capture())).toBe(0);
+    const forced = capture();
+    expect(await runCli(["tally", "--crashes", crashes, "--sites", sites, "--out", out, "--force"], forced)).toBe(0);
+    // Without --window the years come from the data (a stray old row widens them): the user is told.
+    expect(forced.err.join("")).toMatch(/note: the window \d{4}-\d{4} \(\d+ years\) was taken from the data; pass --window/);
   });
   it("warns when the window is under three years (common practice: 3 to 5)", async () => {
     const io = capture();
     expect(await runCli(["tally", "--crashes", crashes, "--sites", sites, "--window", "2024-2025", "--out", join(folder, "short.yaml")], io)).toBe(0);
     expect(io.err.join("")).toMatch(/warning: the window covers 2 year/);
+    expect(io.err.join("")).not.toMatch(/was taken from the data/);
   });
   it("gives exit code 2 and a located message for a bad site map, writing nothing", async () => {
     const bad = join(folder, "bad.geojson");

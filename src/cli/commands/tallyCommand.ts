@@ -63,6 +63,11 @@ export function registerTallyCommand(program: Command, io: CliIo): void {
       }
       writeOutputFiles([{ path: options.out, content: sitesYaml(tallied, quality.window, provenance) }, { path: qualityFile, content: report }], options.force === true);
       io.stderr(crashQualityText(quality, inputs, LISTED_ON_TERMINAL));
+      if (window === undefined) {
+        // One stray old record would otherwise stretch every site's window silently.
+        const { firstYear, lastYear } = quality.window;
+        io.stderr(`note: the window ${firstYear}-${lastYear} (${lastYear - firstYear + 1} years) was taken from the data; pass --window to fix it\n`);
+      }
       io.stderr(`wrote ${options.out} (${tallied.length} sites) and ${qualityFile}\n`);
     });
 }

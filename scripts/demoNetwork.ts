@@ -106,22 +106,14 @@ export function demoNetwork(scenario: Scenario, seed: number): DemoNetwork {
     row("VC-90005", "2025-01-20", far.lat.toFixed(DECIMALS), far.lon.toFixed(DECIMALS), "C", "run-off-road", "far from every site: unassigned"),
   );
 
-  const features = sites.map((site) => ({
+  // The GeoJSON properties are the network site itself, less its geometry.
+  const features = sites.map(({ paths, ...properties }) => ({
     type: "Feature",
-    properties: {
-      id: site.id,
-      name: site.name,
-      kind: site.kind,
-      district: site.district,
-      tags: site.tags,
-      ...(site.aadt !== undefined && { aadt: site.aadt }),
-      ...(site.performanceFunction !== undefined && { performanceFunction: site.performanceFunction }),
-      candidates: site.candidates,
-    },
+    properties,
     geometry:
-      site.kind === "intersection"
-        ? { type: "Point", coordinates: [site.paths[0]![0]!.lon, site.paths[0]![0]!.lat] }
-        : { type: "LineString", coordinates: site.paths[0]!.map((p) => [p.lon, p.lat]) },
+      properties.kind === "intersection"
+        ? { type: "Point", coordinates: [paths[0]![0]!.lon, paths[0]![0]!.lat] }
+        : { type: "LineString", coordinates: paths[0]!.map((p) => [p.lon, p.lat]) },
   }));
   const geojson = { type: "FeatureCollection", name: "Vellmar candidate sites (invented demo city)", features };
   return {

@@ -122,11 +122,17 @@ function nearestAtAnyDistance(index: SiteIndex, x: number, y: number, before: (a
   const lastRing = Math.max(column, columns - 1 - column, row, rows - 1 - row);
   for (let ring = firstRing; ring <= lastRing; ring++) {
     if (best >= 0 && bestD <= (ring - 1) * cellM) break;
-    for (let c = column - ring; c <= column + ring; c++) {
+    // Walk only the part of each ring that lies on the grid: a crash far off the network (e.g. with
+    // swapped coordinates) would otherwise scan rings tens of thousands of cells wide, nearly all empty.
+    const c0 = Math.max(0, column - ring);
+    const c1 = Math.min(columns - 1, column + ring);
+    for (let c = c0; c <= c1; c++) {
       visit(c, row - ring);
       if (ring > 0) visit(c, row + ring);
     }
-    for (let r = row - ring + 1; r <= row + ring - 1; r++) {
+    const r0 = Math.max(0, row - ring + 1);
+    const r1 = Math.min(rows - 1, row + ring - 1);
+    for (let r = r0; r <= r1; r++) {
       visit(column - ring, r);
       visit(column + ring, r);
     }

@@ -63,7 +63,7 @@ describe("assignCrashes on a hand-drawn network", () => {
 });
 
 describe("assignCrashes agrees with a brute-force search", () => {
-  it("on 2000 seeded crashes over a 60-site grid network", () => {
+  it("on 2,200 seeded crashes over a 60-site grid network, 200 of them far off it", () => {
     let state = 12345;
     const next = () => ((state = (Math.imul(state, 1103515245) + 12345) >>> 0) / 4294967296);
     const sites: NetworkSite[] = [];
@@ -72,7 +72,10 @@ describe("assignCrashes agrees with a brute-force search", () => {
         sites.push(site(`I-${i}-${j}`, "intersection", [[i * 300 - 750, j * 300 - 600]]));
         sites.push(site(`S-${i}-${j}`, "segment", [[i * 300 - 750, j * 300 - 600], [i * 300 - 450 - 60 * next(), j * 300 - 600 + 40 * next()]]));
       }
-    const crashes: [number, number][] = Array.from({ length: 2000 }, () => [-900 + 1800 * next(), -750 + 1500 * next()]);
+    const near: [number, number][] = Array.from({ length: 2000 }, () => [-900 + 1800 * next(), -750 + 1500 * next()]);
+    // Far off the network too (up to 20 km out), where the nearest-site search starts outside the grid.
+    const far: [number, number][] = Array.from({ length: 200 }, () => [-20_000 + 40_000 * next(), -20_000 + 40_000 * next()]);
+    const crashes = [...near, ...far];
     const result = assignCrashes(sites, crashes.map(([x, y]) => at(x, y)));
     // The brute force uses assignCrashes's own plane so that it checks the search, not the projection.
     const own = localPlane(centreOfSites(sites));

@@ -43,6 +43,21 @@ export function checkScenarioReferences(
   }
   checkAmount(raw.budget, ["budget"], problem);
   for (const severity of ["K", "A", "B", "C", "O"] as const) checkAmount(raw.economics.crashCosts[severity], ["economics", "crashCosts", severity], problem);
+  const ksiCosting = raw.economics.ksiCosting;
+  if (ksiCosting?.unitCost !== undefined) checkAmount(ksiCosting.unitCost, ["economics", "ksiCosting", "unitCost"], problem);
+  if (ksiCosting?.method === "by-severity" && (ksiCosting.unitCost !== undefined || ksiCosting.fatalShare !== undefined)) {
+    problem("rule-conflict", ["economics", "ksiCosting"], "unitCost and fatalShare only apply when method is 'combined'", "set method: combined, or remove them");
+  }
+  if (ksiCosting?.unitCost !== undefined && ksiCosting.fatalShare !== undefined) {
+    problem("rule-conflict", ["economics", "ksiCosting"], "give either a combined unitCost or a fatalShare to weight the K and A costs, not both", "keep one of the two");
+  }
+  const escalation = raw.economics.crashCosts.escalation;
+  if (escalation !== undefined && raw.economics.crashCosts.priceYear === undefined) {
+    problem("missing-price-year", ["economics", "crashCosts", "escalation"], "escalation needs the crash costs' own price year", "add crashCosts.priceYear (the year the unit costs are in)");
+  }
+  if (escalation !== undefined && "annualRate" in escalation && raw.economics.priceYear === undefined) {
+    problem("missing-price-year", ["economics", "crashCosts", "escalation"], "escalation at an annual rate needs the programme's price year", "add economics.priceYear (the year capital costs and the budget are in)");
+  }
 
   const siteIndex = new Map<string, number>();
   const districts = new Set<string>();
@@ -66,6 +81,9 @@ export function checkScenarioReferences(
       if (!treatment.appliesTo.includes(site.kind)) {
         problem("not-applicable", path, `treatment '${id}' does not apply to ${site.kind === "intersection" ? "an" : "a"} ${site.kind}`, `it applies to: ${treatment.appliesTo.join(", ")}`);
       }
+      if (site.area !== undefined && treatment.appliesToAreas !== undefined && !treatment.appliesToAreas.includes(site.area)) {
+        problem("not-applicable", path, `treatment '${id}' is meant for ${treatment.appliesToAreas.join(" or ")} roads, and site '${site.id}' is ${site.area}`, "drop it from this site's candidates, or correct the site's area");
+      }
       if (treatment.cost.basis === "per-km" && site.lengthKm === undefined) {
         problem("missing-length", ["sites", index], `treatment '${id}' is costed per km but site '${site.id}' has no lengthKm`, "add lengthKm to the site");
       }
@@ -78,6 +96,13 @@ export function checkScenarioReferences(
     if (site.performanceFunction !== undefined && !performanceFunctions.has(site.performanceFunction)) {
       const guess = closestName(site.performanceFunction, performanceFunctions);
       problem("unknown-id", ["sites", index, "performanceFunction"], `unknown performance function '${site.performanceFunction}'`, guess ? `did you mean '${guess}'?` : "define it under performanceFunctions in a catalogue");
+    }
+  });
+
+  Object.keys(raw.calibration ?? {}).forEach((id) => {
+    if (!performanceFunctions.has(id)) {
+      const guess = closestName(id, performanceFunctions);
+      problem("unknown-id", ["calibration", id], `unknown performance function '${id}'`, guess ? `did you mean '${guess}'?` : "calibrate a performance function defined in a catalogue", true);
     }
   });
 

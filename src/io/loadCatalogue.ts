@@ -6,6 +6,7 @@ import {
   type CrashType,
   type Effect,
   type SafetyPerformanceFunction,
+  type AreaType,
   type Severity,
   type SiteKind,
   type Treatment,
@@ -25,6 +26,7 @@ interface RawTreatment {
   id: string;
   name: string;
   appliesTo: SiteKind[];
+  areas?: AreaType[];
   cost: { perSite?: number; perKm?: number };
   costSource?: string;
   upkeepPerYear?: number;
@@ -76,6 +78,7 @@ function toTreatment(raw: RawTreatment): Treatment {
     id: raw.id,
     name: raw.name,
     appliesTo: raw.appliesTo,
+    ...(raw.areas !== undefined && { appliesToAreas: raw.areas }),
     cost: raw.cost.perKm !== undefined ? { basis: "per-km", amount: raw.cost.perKm } : { basis: "per-site", amount: raw.cost.perSite ?? 0 },
     upkeepPerYear: raw.upkeepPerYear ?? 0,
     serviceLifeYears: raw.serviceLifeYears,
@@ -105,6 +108,7 @@ function toPerformanceFunction(raw: RawPerformanceFunction): SafetyPerformanceFu
     lengthExponent: raw.lengthExponent ?? 0,
     overdispersion: raw.overdispersion,
     overdispersionPerKm: raw.overdispersionPerKm ?? false,
+    calibrationFactor: 1,
     shares: completeCrashMatrix(raw.shares),
     source: raw.source,
   };

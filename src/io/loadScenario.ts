@@ -1,16 +1,24 @@
 import { existsSync, realpathSync } from "node:fs";
 import { dirname, isAbsolute, join, relative, resolve, sep } from "node:path";
 import { completeCrashMatrix } from "../model/crashMatrix.js";
+import { estimateCalibrationFactor } from "../model/estimateCalibrationFactor.js";
+import { resolveCrashCosts, type StatedCrashCosts } from "../model/resolveCrashCosts.js";
+import { empiricalBayesGap } from "../model/siteBaselines.js";
 import type {
+  AreaType,
   BaselineMethod,
   Catalogue,
+  CmfCombinationRule,
   CrashType,
   Objective,
   PolicyRule,
+  RenewalRule,
+  SafetyPerformanceFunction,
   Scenario,
   Severity,
   Site,
   SiteKind,
+  SpfCalibration,
 } from "../model/types.js";
 import { checkScenarioReferences } from "./checkScenarioReferences.js";
 import { InputError, type InputProblem } from "./InputError.js";
@@ -27,6 +35,7 @@ interface RawSite {
   kind: SiteKind;
   district: string;
   tags?: string[];
+  area?: AreaType;
   location?: { lon: number; lat: number };
   lengthKm?: number;
   aadt?: number;
@@ -49,10 +58,16 @@ export interface RawScenario {
   economics: {
     discountRate: number;
     horizonYears: number;
-    crashCosts: Record<Severity, Amount> & { source: string; priceYear?: number };
+    priceYear?: number;
+    crashCosts: Record<Severity, Amount> & { source: string; priceYear?: number; escalation?: StatedCrashCosts["escalation"] };
+    ksiCosting?: { method: "combined" | "by-severity"; unitCost?: Amount; fatalShare?: number };
+    trafficGrowthRate?: number;
+    renewal?: RenewalRule;
   };
   objective?: Objective;
   baseline?: BaselineMethod;
+  calibration?: Record<string, number | "estimate">;
+  cmfCombination?: { rule: CmfCombinationRule; floor?: number };
   maxTreatmentsPerSite?: number;
   rules?: {
     mustFund?: { site: string; treatments?: string[] }[];
@@ -154,8 +169,25 @@ function amount(value: Amount): number {
   return parseAmount(value)!;
 }
 
-function toScenario(raw: RawScenario, catalogue: Catalogue): Scenario {
+function toScenario(raw: RawScenario, uncalibrated: Catalogue): Scenario {
   const costs = raw.economics.crashCosts;
+  const ksiCosting = raw.economics.ksiCosting;
+  const sites = raw.sites.map(toSite);
+  const windowYears = raw.crashWindow.lastYear - raw.crashWindow.firstYear + 1;
+  const { catalogue, calibrations } = calibrate(uncalibrated, raw.calibration ?? {}, sites, windowYears);
+  const stated: StatedCrashCosts = {
+    perCrash: { K: amount(costs.K), A: amount(costs.A), B: amount(costs.B), C: amount(costs.C), O: amount(costs.O) },
+    source: costs.source,
+    ...(costs.priceYear !== undefined && { priceYear: costs.priceYear }),
+    ...(costs.escalation !== undefined && { escalation: costs.escalation }),
+    ...(ksiCosting !== undefined && {
+      ksiCosting: {
+        method: ksiCosting.method,
+        ...(ksiCosting.unitCost !== undefined && { unitCost: amount(ksiCosting.unitCost) }),
+        ...(ksiCosting.fatalShare !== undefined && { fatalShare: ksiCosting.fatalShare }),
+      },
+    }),
+  };
   return {
     name: raw.name,
     currency: raw.currency,
@@ -164,19 +196,47 @@ function toScenario(raw: RawScenario, catalogue: Catalogue): Scenario {
     economics: {
       discountRate: raw.economics.discountRate,
       horizonYears: raw.economics.horizonYears,
-      crashCosts: {
-        perCrash: { K: amount(costs.K), A: amount(costs.A), B: amount(costs.B), C: amount(costs.C), O: amount(costs.O) },
-        source: costs.source,
-        ...(costs.priceYear !== undefined && { priceYear: costs.priceYear }),
-      },
+      crashCosts: resolveCrashCosts(stated, raw.economics.priceYear, sites),
+      ...(raw.economics.priceYear !== undefined && { priceYear: raw.economics.priceYear }),
+      trafficGrowthRate: raw.economics.trafficGrowthRate ?? 0,
+      renewal: raw.economics.renewal ?? "none",
+      cmfCombination: raw.cmfCombination ?? { rule: "multiplicative" },
     },
     objective: raw.objective ?? "ksi",
-    baseline: raw.baseline ?? "observed",
+    baseline: raw.baseline ?? "auto",
     maxTreatmentsPerSite: raw.maxTreatmentsPerSite ?? DEFAULT_MAX_TREATMENTS_PER_SITE,
     catalogue,
-    sites: raw.sites.map(toSite),
+    sites,
     rules: toRules(raw.rules ?? {}),
+    calibrations,
   };
+}
+
+/**
+ * The catalogue with each calibrated SPF's factor set: a given number, or an estimate from the
+ * scenario's own sites that name the SPF and have what it needs (see estimateCalibrationFactor).
+ */
+function calibrate(
+  catalogue: Catalogue,
+  requested: Readonly<Record<string, number | "estimate">>,
+  sites: readonly Site[],
+  windowYears: number,
+): { catalogue: Catalogue; calibrations: SpfCalibration[] } {
+  const calibrations: SpfCalibration[] = [];
+  const performanceFunctions = catalogue.performanceFunctions.map((spf): SafetyPerformanceFunction => {
+    const asked = requested[spf.id];
+    if (asked === undefined) return spf;
+    if (asked !== "estimate") {
+      calibrations.push({ performanceFunction: spf.id, factor: asked, method: "given" });
+      return { ...spf, calibrationFactor: asked };
+    }
+    const usable = sites.filter((site) => site.performanceFunction === spf.id && empiricalBayesGap(site, spf) === undefined);
+    const estimate = estimateCalibrationFactor(spf, usable, windowYears);
+    if (estimate === undefined) return spf;
+    calibrations.push({ performanceFunction: spf.id, method: "estimated", ...estimate });
+    return { ...spf, calibrationFactor: estimate.factor };
+  });
+  return { catalogue: { ...catalogue, performanceFunctions }, calibrations };
 }
 
 function toSite(raw: RawSite): Site {
@@ -186,6 +246,7 @@ function toSite(raw: RawSite): Site {
     kind: raw.kind,
     district: raw.district,
     tags: raw.tags ?? [],
+    ...(raw.area !== undefined && { area: raw.area }),
     ...(raw.location !== undefined && { location: raw.location }),
     ...(raw.lengthKm !== undefined && { lengthKm: raw.lengthKm }),
     ...(raw.aadt !== undefined && { aadt: raw.aadt }),

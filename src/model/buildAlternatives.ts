@@ -37,7 +37,7 @@ export function buildAlternatives(scenario: Scenario, baselines: readonly SiteBa
     if (!baseline) throw new RangeError(`no baseline for site ${site.id}`);
     return {
       site,
-      alternatives: sets.map((set) => evaluateAlternative(site, set, baseline.expectedPerYear, scenario.economics)),
+      alternatives: sets.map((set) => evaluateAlternative(site, set, baseline.expectedPerYear, scenario.economics, undefined, baseline.crashGrowthPerYear)),
       required: mustFund !== undefined,
     };
   });

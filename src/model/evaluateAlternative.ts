@@ -1,23 +1,33 @@
-import { combineCmfs, type CellCmf } from "./combineCmfs.js";
+import { actingTreatments, combineCmfs, type CellCmf } from "./combineCmfs.js";
+import { growingSeriesPresentWorth } from "./growingSeriesPresentWorth.js";
+import { lifecycleCostPV, yearsInService } from "./lifecycleCostPV.js";
 import { treatmentCmf } from "./treatmentCmf.js";
 import { treatmentCapitalCost } from "./treatmentCapitalCost.js";
-import { uniformSeriesPresentWorth } from "./uniformSeriesPresentWorth.js";
-import { CRASH_TYPES, KSI_SEVERITIES, SEVERITIES, type Alternative, type CrashMatrix, type Economics, type Severity, type Site, type Treatment } from "./types.js";
+import { CRASH_TYPES, KSI_SEVERITIES, SEVERITIES, type Alternative, type CrashMatrix, type Economics, type RenewalRule, type Severity, type Site, type Treatment } from "./types.js";
 
-/** How benefits are counted when treatments in one alternative have different service lives. */
-export const SERVICE_LIFE_RULE =
-  "each treatment acts for its own service life, capped at the analysis horizon, and is not renewed; in each year the CMFs of the treatments still in service are combined; upkeep is paid over each treatment's own life; no residual value is counted";
+/** How benefits are counted when treatments in one alternative have different service lives, by renewal rule. */
+export function describeServiceLives(renewal: RenewalRule): string {
+  const combined = "in each year the CMFs of the treatments in service are combined";
+  if (renewal === "renew") {
+    return `each treatment is renewed at its capital cost (discounted) whenever its service life ends inside the analysis horizon, so it acts to the horizon; ${combined}; upkeep is paid every year to the horizon; the unexpired life of the last installation at the horizon is credited at straight-line residual value`;
+  }
+  if (renewal === "residual-value") {
+    return `each treatment acts for its own service life, capped at the analysis horizon, and is not renewed; ${combined}; upkeep is paid over each treatment's own life; a treatment whose life runs past the horizon is credited the straight-line residual value of its unexpired life`;
+  }
+  return `each treatment acts for its own service life, capped at the analysis horizon, and is not renewed; ${combined}; upkeep is paid over each treatment's own life; no residual value is counted`;
+}
 
 /**
  * Effects and economics of applying `treatments` together at `site`, given the site's expected
  * crashes per year without treatment.
  *
- * Year by year (1 … horizon) only the treatments still within their service life act; crashes
- * avoided in a year = Σ cells expected × (1 − combined CMF of the active treatments). KSI avoided
- * = the K and A cells summed over those years. Benefit PV discounts each year's avoided crash
- * costs with the uniform-series present-worth factor over the span the active set is constant.
- * Lifecycle cost = capital + Σ upkeep × (P/A, i, min(life, horizon)).
- * `cellCmf` may replace treatmentCmf with a faster lookup of the same values (uncertainty draws).
+ * Year by year (1 … horizon) only the treatments in service act (see describeServiceLives);
+ * crashes avoided in year t = G^t × Σ cells expected × (1 − combined CMF of the active treatments),
+ * with G the site's crash growth per year (traffic growth; 1 for none). K+A avoided = the K and A
+ * cells summed over those years. Benefit PV discounts each year's avoided crash costs with the
+ * geometric-series present-worth factor over the span the active set is constant. Lifecycle cost
+ * = Σ treatments' lifecycleCostPV. `cellCmf` may replace treatmentCmf with a faster lookup of the
+ * same values (uncertainty draws).
  */
 export function evaluateAlternative(
   site: Site,
@@ -25,34 +35,40 @@ export function evaluateAlternative(
   expectedPerYear: CrashMatrix,
   economics: Economics,
   cellCmf: CellCmf = treatmentCmf,
+  crashGrowthPerYear = 1,
 ): Alternative {
   const { discountRate, horizonYears, crashCosts } = economics;
-  const cost = treatments.reduce((total, treatment) => total + treatmentCapitalCost(treatment, site), 0);
-  const lifecycleCostPV =
-    cost +
-    treatments.reduce((total, t) => total + t.upkeepPerYear * uniformSeriesPresentWorth(discountRate, Math.min(t.serviceLifeYears, horizonYears)), 0);
+  const renewal = economics.renewal ?? "none";
+  const cmfCombination = economics.cmfCombination;
+  const capital = treatments.map((treatment) => treatmentCapitalCost(treatment, site));
+  const cost = capital.reduce((total, amount) => total + amount, 0);
+  const lifecycle = treatments.reduce(
+    (total, t, i) => total + lifecycleCostPV(capital[i]!, t.upkeepPerYear, t.serviceLifeYears, discountRate, horizonYears, renewal),
+    0,
+  );
+  const inService = (t: Treatment) => yearsInService(t.serviceLifeYears, horizonYears, renewal);
 
   // Spans of years over which the set of treatments in service does not change.
-  const ends = [...new Set(treatments.map((t) => Math.min(t.serviceLifeYears, horizonYears)))].sort((a, b) => a - b);
+  const ends = [...new Set(treatments.map(inService))].sort((a, b) => a - b);
   let start = 0;
   let ksiAvoided = 0;
   let benefitPV = 0;
   let firstYear: Record<Severity, number> | undefined;
   for (const end of ends) {
-    const active = treatments.filter((t) => Math.min(t.serviceLifeYears, horizonYears) >= end);
+    const active = treatments.filter((t) => inService(t) >= end);
     const avoided = { K: 0, A: 0, B: 0, C: 0, O: 0 };
     for (const type of CRASH_TYPES) {
       for (const severity of SEVERITIES) {
         const expected = expectedPerYear[type][severity];
         // Empty cells avoid nothing; skipping them is most of the work saved on sparse crash matrices.
-        if (expected !== 0) avoided[severity] += expected * (1 - combineCmfs(active, type, severity, cellCmf));
+        if (expected !== 0) avoided[severity] += expected * (1 - combineCmfs(active, type, severity, cellCmf, cmfCombination));
       }
     }
     firstYear ??= avoided;
-    const years = end - start;
-    ksiAvoided += KSI_SEVERITIES.reduce((total, severity) => total + avoided[severity], 0) * years;
+    const crashYears = growingSeriesPresentWorth(0, crashGrowthPerYear, start, end);
+    ksiAvoided += KSI_SEVERITIES.reduce((total, severity) => total + avoided[severity], 0) * crashYears;
     const benefitPerYear = SEVERITIES.reduce((total, severity) => total + avoided[severity] * crashCosts.perCrash[severity], 0);
-    benefitPV += benefitPerYear * (uniformSeriesPresentWorth(discountRate, end) - uniformSeriesPresentWorth(discountRate, start));
+    benefitPV += benefitPerYear * growingSeriesPresentWorth(discountRate, crashGrowthPerYear, start, end);
     start = end;
   }
 
@@ -60,13 +76,28 @@ export function evaluateAlternative(
     site: site.id,
     treatments: treatments.map((t) => t.id),
     cost,
-    lifecycleCostPV,
-    crashesAvoidedPerYear: firstYear ?? { K: 0, A: 0, B: 0, C: 0, O: 0 },
+    lifecycleCostPV: lifecycle,
+    crashesAvoidedPerYear: firstYear === undefined ? { K: 0, A: 0, B: 0, C: 0, O: 0 } : scaleSeverities(firstYear, crashGrowthPerYear),
     ksiAvoided,
     benefitPV,
-    bcRatio: lifecycleCostPV > 0 ? benefitPV / lifecycleCostPV : benefitPV > 0 ? Infinity : 0,
-    npv: benefitPV - lifecycleCostPV,
-    costPerKsi: ksiAvoided > 0 ? lifecycleCostPV / ksiAvoided : Infinity,
+    bcRatio: lifecycle > 0 ? benefitPV / lifecycle : benefitPV > 0 ? Infinity : 0,
+    npv: benefitPV - lifecycle,
+    costPerKsi: ksiAvoided > 0 ? lifecycle / ksiAvoided : Infinity,
     effectiveYears: ends[ends.length - 1] ?? 0,
+    sharedCells: treatments.length < 2 ? 0 : countSharedCells(treatments, expectedPerYear, cellCmf),
   };
+}
+
+function scaleSeverities(values: Record<Severity, number>, factor: number): Record<Severity, number> {
+  return factor === 1 ? values : { K: values.K * factor, A: values.A * factor, B: values.B * factor, C: values.C * factor, O: values.O * factor };
+}
+
+function countSharedCells(treatments: readonly Treatment[], expectedPerYear: CrashMatrix, cellCmf: CellCmf): number {
+  let shared = 0;
+  for (const type of CRASH_TYPES) {
+    for (const severity of SEVERITIES) {
+      if (expectedPerYear[type][severity] !== 0 && actingTreatments(treatments, type, severity, cellCmf) > 1) shared += 1;
+    }
+  }
+  return shared;
 }

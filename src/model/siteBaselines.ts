@@ -1,13 +1,15 @@
 import { empiricalBayesCrashesPerYear } from "./empiricalBayesCrashesPerYear.js";
 import { observedCrashesPerYear } from "./observedCrashesPerYear.js";
-import type { BaselineMethod, CrashMatrix, SafetyPerformanceFunction, Scenario, Site } from "./types.js";
+import type { CrashMatrix, SafetyPerformanceFunction, Scenario, Site, SiteBaselineMethod } from "./types.js";
 
 /** A site's expected crashes per year without treatment, and how they were estimated. */
 export interface SiteBaseline {
   readonly site: string;
   readonly expectedPerYear: CrashMatrix;
-  readonly method: BaselineMethod;
-  /** Why the site fell back to another method than the scenario asked for. */
+  readonly method: SiteBaselineMethod;
+  /** Factor by which expected crashes grow each year with traffic (1: no growth). */
+  readonly crashGrowthPerYear?: number;
+  /** Why the site uses observed counts when the scenario asked for Empirical Bayes or auto. */
   readonly note?: string;
 }
 
@@ -19,26 +21,44 @@ export function windowYears(scenario: Scenario): number {
   return scenario.crashWindow.lastYear - scenario.crashWindow.firstYear + 1;
 }
 
+/** How traffic growth feeds expected crashes; stated in every output that shows assumptions. */
+export function describeTrafficGrowth(rate: number): string {
+  if (rate === 0) return "none: expected crashes stay at their baseline every year";
+  return `AADT grows ${(100 * rate).toFixed(2)}% a year; at Empirical Bayes sites expected crashes grow with the SPF's AADT exponent b, by (1 + g)^b a year (the SPF's elasticity to traffic, Highway Safety Manual 2010 Part C form); at observed-count sites they grow in proportion, by (1 + g) a year`;
+}
+
 /**
- * Expected crashes per year at every site by the scenario's baseline method. With
- * `empirical-bayes`, a site that lacks what EB needs (AADT, a known SPF that applies to its kind,
- * a length when the SPF uses one) falls back to its observed counts, with a note saying why.
+ * Expected crashes per year at every site by the scenario's baseline method:
+ * - `observed`: the site's own counts per window year;
+ * - `empirical-bayes`: the EB estimate; a site that lacks what EB needs (AADT, a known SPF that
+ *   applies to its kind, a length when the SPF uses one) falls back to its observed counts, with
+ *   a note saying why;
+ * - `auto` (the default): the same as `empirical-bayes`; the name says that observed counts are an
+ *   expected fallback rather than the user's choice.
+ * Each baseline also carries its yearly crash growth under the scenario's traffic growth rate.
  */
 export function siteBaselines(scenario: Scenario): SiteBaseline[] {
   const years = windowYears(scenario);
+  const growth = 1 + (scenario.economics.trafficGrowthRate ?? 0);
   const performanceFunctions = new Map(scenario.catalogue.performanceFunctions.map((spf) => [spf.id, spf]));
   return scenario.sites.map((site) => {
     const observed = (note?: string): SiteBaseline => ({
       site: site.id,
       expectedPerYear: observedCrashesPerYear(site.crashes, years),
       method: "observed",
+      crashGrowthPerYear: growth,
       ...(note !== undefined && { note }),
     });
-    if (scenario.baseline !== "empirical-bayes") return observed();
+    if (scenario.baseline === "observed") return observed();
     const spf = site.performanceFunction === undefined ? undefined : performanceFunctions.get(site.performanceFunction);
     const missing = empiricalBayesGap(site, spf);
     if (missing !== undefined || spf === undefined) return observed(`observed counts used: ${missing}`);
-    return { site: site.id, expectedPerYear: empiricalBayesCrashesPerYear(site, spf, years).expectedPerYear, method: "empirical-bayes" };
+    return {
+      site: site.id,
+      expectedPerYear: empiricalBayesCrashesPerYear(site, spf, years).expectedPerYear,
+      method: "empirical-bayes",
+      crashGrowthPerYear: Math.pow(growth, spf.aadtExponent),
+    };
   });
 }
 

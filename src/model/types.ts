@@ -35,6 +35,10 @@ export type CrashMatrix = Readonly<Record<CrashType, Readonly<Record<Severity, n
 export type SiteKind = "intersection" | "segment" | "corridor";
 export const SITE_KINDS: readonly SiteKind[] = ["intersection", "segment", "corridor"];
 
+/** Urban or rural setting of a site; some treatments suit only one. */
+export type AreaType = "urban" | "rural";
+export const AREA_TYPES: readonly AreaType[] = ["urban", "rural"];
+
 /** One crash-modification effect of a treatment on a set of crash cells. */
 export interface Effect {
   readonly crashTypes: readonly CrashType[];
@@ -57,6 +61,8 @@ export interface Treatment {
   readonly id: string;
   readonly name: string;
   readonly appliesTo: readonly SiteKind[];
+  /** Settings the treatment suits (absent: any); a site with a different `area` may not list it. */
+  readonly appliesToAreas?: readonly AreaType[];
   readonly cost: CostModel;
   readonly upkeepPerYear: number;
   readonly serviceLifeYears: number;
@@ -78,6 +84,8 @@ export interface SafetyPerformanceFunction {
   /** Negative binomial overdispersion k; per km of length when `overdispersionPerKm` is set. */
   readonly overdispersion: number;
   readonly overdispersionPerKm: boolean;
+  /** Local calibration factor C (HSM Part C): predictions are multiplied by it; 1 when uncalibrated. */
+  readonly calibrationFactor?: number;
   /** Share of predicted crashes in each crash type × severity cell (sums to 1). */
   readonly shares: CrashMatrix;
   readonly source: string;
@@ -100,6 +108,7 @@ export interface Site {
   readonly kind: SiteKind;
   readonly district: string;
   readonly tags: readonly string[];
+  readonly area?: AreaType;
   readonly location?: GeoPoint;
   readonly lengthKm?: number;
   /** Annual average daily traffic, used by Empirical Bayes. */
@@ -113,21 +122,71 @@ export interface Site {
   readonly costOverrides: Readonly<Record<string, number>>;
 }
 
+/**
+ * How fatal (K) and serious-injury (A) crashes are valued: each at its own unit cost, or both at
+ * one combined K+A unit cost (so a chance fatal crash does not outweigh many serious ones).
+ */
+export type KsiCosting =
+  | { readonly method: "by-severity" }
+  | {
+      readonly method: "combined";
+      /** The combined K+A unit cost, in the programme's price year. */
+      readonly unitCost: number;
+      /** How the unit cost was found, in words (given, or weighted by which fatal share). */
+      readonly basis: string;
+      /** K ÷ (K + A) used for the weighting; absent when the user gave the unit cost. */
+      readonly fatalShare?: number;
+    };
+
 /** Unit cost of one crash by severity, for monetising benefits. */
 export interface CrashCosts {
+  /** Unit costs used for benefits: escalated to the programme's price year, K and A combined when asked. */
   readonly perCrash: Readonly<Record<Severity, number>>;
+  /** Unit costs as the scenario states them, in their own price year. */
+  readonly statedPerCrash?: Readonly<Record<Severity, number>>;
   readonly source: string;
   readonly priceYear?: number;
+  /** Factor applied to the stated costs to bring them to the programme's price year (absent: 1, none). */
+  readonly escalationFactor?: number;
+  /** How the escalation factor was found, when there is one. */
+  readonly escalation?: string;
+  readonly ksiCosting?: KsiCosting;
+}
+
+/** What happens when a treatment's service life ends inside the analysis horizon. */
+export type RenewalRule = "none" | "renew" | "residual-value";
+export const RENEWAL_RULES: readonly RenewalRule[] = ["none", "renew", "residual-value"];
+
+/** How the CMFs of treatments that act on the same crash cell are combined. */
+export type CmfCombinationRule = "multiplicative" | "dominant-effect" | "dominant-common-residuals";
+export const CMF_COMBINATION_RULES: readonly CmfCombinationRule[] = ["multiplicative", "dominant-effect", "dominant-common-residuals"];
+
+export interface CmfCombination {
+  readonly rule: CmfCombinationRule;
+  /** Lowest combined CMF allowed in any one cell (absent: no floor). */
+  readonly floor?: number;
 }
 
 export interface Economics {
   readonly discountRate: number;
   readonly horizonYears: number;
   readonly crashCosts: CrashCosts;
+  /** Price year of capital costs and the budget (the programme's money), when stated. */
+  readonly priceYear?: number;
+  /** Annual AADT growth, a fraction; expected crashes grow with it (see siteBaselines). */
+  /** Absent: 0. */
+  readonly trafficGrowthRate?: number;
+  /** Absent: none. */
+  readonly renewal?: RenewalRule;
+  /** Absent: multiplicative, no floor. */
+  readonly cmfCombination?: CmfCombination;
 }
 
 export type Objective = "ksi" | "benefit";
-export type BaselineMethod = "observed" | "empirical-bayes";
+/** How a site's expected crashes are estimated; `auto` is Empirical Bayes where the site allows it, observed otherwise. */
+export type BaselineMethod = "auto" | "observed" | "empirical-bayes";
+/** The method actually used at one site. */
+export type SiteBaselineMethod = "observed" | "empirical-bayes";
 
 /**
  * A policy rule of the scenario. Spending, KSI-share and count rules cover one district, one tag,
@@ -146,6 +205,17 @@ export type PolicyRule =
   | { readonly kind: "ksi-share-floor"; readonly district?: string; readonly tag?: string; readonly share: number }
   | { readonly kind: "max-projects"; readonly district?: string; readonly tag?: string; readonly count: number };
 
+/** How one SPF's local calibration factor was set. */
+export interface SpfCalibration {
+  readonly performanceFunction: string;
+  readonly factor: number;
+  readonly method: "given" | "estimated";
+  /** For an estimate: the sites, observed crashes and SPF-predicted crashes over the window behind it. */
+  readonly sites?: number;
+  readonly observedCrashes?: number;
+  readonly predictedCrashes?: number;
+}
+
 export interface Scenario {
   readonly name: string;
   readonly currency: string;
@@ -158,6 +228,8 @@ export interface Scenario {
   readonly catalogue: Catalogue;
   readonly sites: readonly Site[];
   readonly rules: readonly PolicyRule[];
+  /** Local calibration of SPFs the scenario asked for (the catalogue's SPFs carry the factors). */
+  readonly calibrations?: readonly SpfCalibration[];
 }
 
 /** One allowed combination of treatments at one site, with its effects and economics. */
@@ -178,6 +250,8 @@ export interface Alternative {
   readonly npv: number;
   /** Lifecycle cost per KSI crash avoided (Infinity when none is avoided). */
   readonly costPerKsi: number;
-  /** Years the alternative acts, within the horizon (the longest treatment life, capped). */
+  /** Years the alternative acts, within the horizon (the longest treatment life, capped; the horizon when renewed). */
   readonly effectiveYears: number;
+  /** Crash cells with expected crashes on which two or more of its treatments act (their combined CMF is a modelling assumption). */
+  readonly sharedCells: number;
 }

@@ -1,6 +1,13 @@
-import { CMF_COMBINATION_RULE } from "../model/combineCmfs.js";
-import { SERVICE_LIFE_RULE } from "../model/evaluateAlternative.js";
+import { describeCmfCombination } from "../model/combineCmfs.js";
+import { describeServiceLives } from "../model/evaluateAlternative.js";
+import { describeTrafficGrowth, type SiteBaseline } from "../model/siteBaselines.js";
 import type { Scenario } from "../model/types.js";
+
+/** How many sites used each baseline method. */
+export interface BaselineCounts {
+  readonly empiricalBayes: number;
+  readonly observed: number;
+}
 
 /** The assumptions behind every figure, as the JSON and reports state them. */
 export interface Assumptions {
@@ -9,28 +16,71 @@ export interface Assumptions {
   readonly horizonYears: number;
   readonly crashWindow: { readonly firstYear: number; readonly lastYear: number };
   readonly baseline: string;
+  /** Sites by the baseline method actually used (present when the baselines are known). */
+  readonly baselineCounts: BaselineCounts | null;
+  /** Unit costs used for benefits (escalated, K and A combined when so valued). */
   readonly crashCosts: Readonly<Record<string, number>>;
+  /** Unit costs as the scenario states them, in their own price year. */
+  readonly statedCrashCosts: Readonly<Record<string, number>>;
   readonly crashCostSource: string;
   readonly crashCostPriceYear: number | null;
+  readonly programmePriceYear: number | null;
+  readonly crashCostEscalation: string;
+  readonly ksiCosting: string;
   readonly cmfCombination: string;
   readonly serviceLives: string;
+  readonly trafficGrowth: string;
+  readonly calibration: string;
   readonly ksiDefinition: string;
 }
 
+export const KSI_DEFINITION =
+  "K+A crashes avoided (KSI crashes): crashes of KABCO severity K (fatal) or A (suspected serious injury) avoided over the service life within the analysis horizon; it counts crashes, not people";
+
 /** Collects the scenario's economic and method assumptions in one plain object. */
-export function describeAssumptions(scenario: Scenario): Assumptions {
+export function describeAssumptions(scenario: Scenario, baselines?: readonly SiteBaseline[]): Assumptions {
   const { economics } = scenario;
+  const costs = economics.crashCosts;
+  const ksiCosting = costs.ksiCosting;
   return {
     currency: scenario.currency,
     discountRate: economics.discountRate,
     horizonYears: economics.horizonYears,
     crashWindow: scenario.crashWindow,
     baseline: scenario.baseline,
-    crashCosts: economics.crashCosts.perCrash,
-    crashCostSource: economics.crashCosts.source,
-    crashCostPriceYear: economics.crashCosts.priceYear ?? null,
-    cmfCombination: CMF_COMBINATION_RULE,
-    serviceLives: SERVICE_LIFE_RULE,
-    ksiDefinition: "KSI avoided counts crashes of KABCO severity K (fatal) and A (suspected serious injury) avoided over the service life within the analysis horizon",
+    baselineCounts: baselines === undefined ? null : countBaselines(baselines),
+    crashCosts: costs.perCrash,
+    statedCrashCosts: costs.statedPerCrash ?? costs.perCrash,
+    crashCostSource: costs.source,
+    crashCostPriceYear: costs.priceYear ?? null,
+    programmePriceYear: economics.priceYear ?? null,
+    crashCostEscalation: costs.escalation ?? "none: unit costs are used in their own price year",
+    ksiCosting:
+      ksiCosting === undefined || ksiCosting.method === "by-severity"
+        ? "by severity: K and A crashes each at their own unit cost"
+        : `combined: K and A crashes both at one K+A unit cost of ${Math.round(ksiCosting.unitCost)} (${ksiCosting.basis})`,
+    cmfCombination: describeCmfCombination(economics.cmfCombination ?? { rule: "multiplicative" }),
+    serviceLives: describeServiceLives(economics.renewal ?? "none"),
+    trafficGrowth: describeTrafficGrowth(economics.trafficGrowthRate ?? 0),
+    calibration: describeCalibration(scenario),
+    ksiDefinition: KSI_DEFINITION,
   };
+}
+
+/** Sites by the baseline method actually used. */
+export function countBaselines(baselines: readonly SiteBaseline[]): BaselineCounts {
+  const empiricalBayes = baselines.filter((baseline) => baseline.method === "empirical-bayes").length;
+  return { empiricalBayes, observed: baselines.length - empiricalBayes };
+}
+
+function describeCalibration(scenario: Scenario): string {
+  const calibrations = scenario.calibrations ?? [];
+  if (calibrations.length === 0) return "none: SPF predictions are used as published (calibration factor 1)";
+  return calibrations
+    .map((c) =>
+      c.method === "given"
+        ? `${c.performanceFunction}: C = ${c.factor} (given)`
+        : `${c.performanceFunction}: C = ${c.factor.toFixed(3)} estimated as Σ observed ÷ Σ predicted = ${c.observedCrashes} ÷ ${(c.predictedCrashes ?? 0).toFixed(1)} over ${c.sites} sites (Highway Safety Manual 2010, Part C, Appendix A)`,
+    )
+    .join("; ");
 }

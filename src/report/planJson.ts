@@ -37,7 +37,7 @@ export function planJson(result: PlanResult): object {
     gap: solution.gap,
     budgetMarginalValue: solution.budgetMarginalValue,
     engine: solution.engine,
-    assumptions: describeAssumptions(prepared.scenario),
+    assumptions: describeAssumptions(prepared.scenario, prepared.baselines),
     cautions: CAUTIONS,
   };
 }

@@ -43,6 +43,7 @@ export function syntheticAlternative(site: string, option: SyntheticOption, inde
     bcRatio: lifecycleCostPV > 0 ? benefitPV / lifecycleCostPV : Infinity,
     npv: benefitPV - lifecycleCostPV,
     costPerKsi: option.ksi > 0 ? lifecycleCostPV / option.ksi : Infinity,
+    sharedCells: 0,
     effectiveYears: 10,
   };
 }

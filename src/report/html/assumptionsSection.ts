@@ -14,6 +14,7 @@ const SEVERITY_NAMES: Readonly<Record<Severity, string>> = {
 };
 
 const BASELINE_METHODS: Readonly<Record<string, string>> = {
+  auto: "auto: Empirical Bayes (Hauer) wherever a site has AADT and a safety performance function, observed counts elsewhere",
   observed: "observed: each site's crashes per year over the crash window",
   "empirical-bayes": "Empirical Bayes (Hauer): observed crashes weighted with a safety performance function's prediction",
 };
@@ -24,10 +25,15 @@ const BASELINE_METHODS: Readonly<Record<string, string>> = {
  */
 export function assumptionsSection(plan: PlanResult): string {
   const scenario = plan.prepared.scenario;
-  const assumptions = describeAssumptions(scenario);
+  const assumptions = describeAssumptions(scenario, plan.prepared.baselines);
   const currency = escapeHtml(assumptions.currency);
   const item = (term: string, value: string) => `<dt>${term}</dt><dd>${value}</dd>`;
-  const costs = SEVERITIES.map((severity) => `<tr><td>${SEVERITY_NAMES[severity]}</td><td class="num">${formatMoney(assumptions.crashCosts[severity] ?? 0)}</td></tr>`).join("");
+  const costs = SEVERITIES.map(
+    (severity) =>
+      `<tr><td>${SEVERITY_NAMES[severity]}</td><td class="num">${formatMoney(assumptions.statedCrashCosts[severity] ?? 0)}</td><td class="num">${formatMoney(assumptions.crashCosts[severity] ?? 0)}</td></tr>`,
+  ).join("");
+  const counts = assumptions.baselineCounts;
+  const baselineUsed = counts === null ? "" : ` Used: Empirical Bayes at ${counts.empiricalBayes} site(s), observed counts at ${counts.observed}.`;
   const used = new Set(plan.funded.flatMap(({ alternative }) => alternative.treatments));
   const treatments = scenario.catalogue.treatments
     .filter((treatment) => used.has(treatment.id))
@@ -49,14 +55,18 @@ ${item("Currency", currency)}
 ${item("Discount rate", `${formatFixed(assumptions.discountRate * 100, 1)}% a year`)}
 ${item("Analysis horizon", `${assumptions.horizonYears} years`)}
 ${item("Crash window", `${assumptions.crashWindow.firstYear}–${assumptions.crashWindow.lastYear}`)}
-${item("Baseline method", escapeHtml(BASELINE_METHODS[assumptions.baseline] ?? assumptions.baseline))}
-${item("KSI", escapeHtml(assumptions.ksiDefinition))}
+${item("Baseline method", escapeHtml((BASELINE_METHODS[assumptions.baseline] ?? assumptions.baseline) + "." + baselineUsed))}
+${item("SPF calibration", escapeHtml(assumptions.calibration))}
+${item("Traffic growth", escapeHtml(assumptions.trafficGrowth))}
+${item("K+A crashes (KSI)", escapeHtml(assumptions.ksiDefinition))}
+${item("Valuing K and A crashes", escapeHtml(assumptions.ksiCosting))}
+${item("Price year", escapeHtml(`${assumptions.programmePriceYear === null ? "programme price year not stated" : `programme money: ${assumptions.programmePriceYear} prices`}; crash costs: ${assumptions.crashCostEscalation}`))}
 ${item("Combining treatments", escapeHtml(assumptions.cmfCombination))}
 ${item("Service lives", escapeHtml(assumptions.serviceLives))}
 ${item("Treatments per site", `at most ${scenario.maxTreatmentsPerSite}`)}
 </dl>
-<h3>Crash costs (${currency} per crash${assumptions.crashCostPriceYear === null ? "" : `, ${assumptions.crashCostPriceYear} prices`})</h3>
-<table class="list compact costs"><tbody>${costs}</tbody></table>
+<h3>Crash costs (${currency} per crash)</h3>
+<table class="list compact costs"><thead><tr><th>Severity</th><th>As stated${assumptions.crashCostPriceYear === null ? "" : ` (${assumptions.crashCostPriceYear} prices)`}</th><th>Used for benefits</th></tr></thead><tbody>${costs}</tbody></table>
 <p class="source">Source: ${escapeHtml(assumptions.crashCostSource)}</p>
 ${rules === "" ? "" : `<h3>Policy rules applied</h3><ul>${rules}</ul>`}
 <h3>CMF sources of the treatments in the list</h3>

@@ -51,6 +51,7 @@ export function demoNetwork(scenario: Scenario, seed: number): DemoNetwork {
       name: site.name,
       kind: site.kind,
       district: site.district,
+      ...(site.area !== undefined && { area: site.area }),
       tags: site.tags,
       ...(site.aadt !== undefined && { aadt: site.aadt }),
       ...(site.performanceFunction !== undefined && { performanceFunction: site.performanceFunction }),

@@ -1,4 +1,4 @@
-import type { GeoPoint, SiteKind } from "../model/types.js";
+import type { AreaType, GeoPoint, SiteKind } from "../model/types.js";
 
 /**
  * A site on the road network as drawn on a map: an intersection is one path of one point; a
@@ -10,6 +10,7 @@ export interface NetworkSite {
   readonly kind: SiteKind;
   readonly district: string;
   readonly tags: readonly string[];
+  readonly area?: AreaType;
   readonly aadt?: number;
   readonly performanceFunction?: string;
   /** Candidate treatment ids, from the feature's `candidates` property (may be empty). */

@@ -124,6 +124,7 @@ function toScenarioSite(site: NetworkSite, count: (type: CrashType, severity: Se
     kind: site.kind,
     district: site.district,
     tags: site.tags,
+    ...(site.area !== undefined && { area: site.area }),
     location: isPoint ? site.paths[0]![0]! : polylineMidpoint(site.paths),
     ...(!isPoint && { lengthKm: polylineLengthKm(site.paths) }),
     ...(site.aadt !== undefined && { aadt: site.aadt }),

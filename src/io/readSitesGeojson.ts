@@ -1,5 +1,5 @@
 import type { NetworkSite } from "../geo/NetworkSite.js";
-import { SITE_KINDS, type GeoPoint, type SiteKind } from "../model/types.js";
+import { AREA_TYPES, SITE_KINDS, type AreaType, type GeoPoint, type SiteKind } from "../model/types.js";
 import { formatFieldPath } from "./fieldPath.js";
 import { InputError, type InputProblem } from "./InputError.js";
 import { readYamlFile, type PathSegment } from "./readYamlFile.js";
@@ -9,7 +9,7 @@ const ID_PATTERN = /^[A-Za-z0-9][A-Za-z0-9._-]*$/;
 /**
  * Reads candidate sites from a GeoJSON FeatureCollection (RFC 7946): a Point is an
  * intersection, a LineString or MultiLineString a segment (or, with kind: corridor, a corridor).
- * Properties: id (required), name, kind, district (required), tags, aadt, performanceFunction,
+ * Properties: id (required), name, kind, district (required), tags, area (urban | rural), aadt, performanceFunction,
  * candidates (treatment ids for the scenario). Coordinates are [longitude, latitude] in WGS84.
  * Every problem is reported with its line and field path; throws InputError.
  */
@@ -56,6 +56,7 @@ export function readSitesGeojson(file: string): NetworkSite[] {
     const candidates = strings("candidates");
     if (props.aadt !== undefined && !(typeof props.aadt === "number" && props.aadt > 0)) problem(at("properties", "aadt"), `aadt '${String(props.aadt)}' is not a positive number`, "give vehicles per day, e.g. 14000");
     if (props.performanceFunction !== undefined && (typeof props.performanceFunction !== "string" || !ID_PATTERN.test(props.performanceFunction))) problem(at("properties", "performanceFunction"), "performanceFunction must be an SPF id", "use an id from the catalogue's performanceFunctions");
+    if (props.area !== undefined && !AREA_TYPES.includes(props.area as AreaType)) problem(at("properties", "area"), `unknown area '${String(props.area)}'`, `use one of: ${AREA_TYPES.join(", ")}`);
     if (tags === undefined || candidates === undefined || typeof props.district !== "string") return;
     sites.push({
       id,
@@ -63,6 +64,7 @@ export function readSitesGeojson(file: string): NetworkSite[] {
       kind,
       district: props.district,
       tags,
+      ...(AREA_TYPES.includes(props.area as AreaType) && { area: props.area as AreaType }),
       ...(typeof props.aadt === "number" && { aadt: props.aadt }),
       ...(typeof props.performanceFunction === "string" && { performanceFunction: props.performanceFunction }),
       candidates,

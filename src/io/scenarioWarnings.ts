@@ -1,4 +1,5 @@
 import { sumCrashMatrix } from "../model/crashMatrix.js";
+import { MIN_CALIBRATION_CRASHES, MIN_CALIBRATION_SITES } from "../model/estimateCalibrationFactor.js";
 import { empiricalBayesGap, MIN_RECOMMENDED_WINDOW_YEARS, windowYears } from "../model/siteBaselines.js";
 import type { Scenario } from "../model/types.js";
 import type { InputProblem } from "./InputError.js";
@@ -54,5 +55,79 @@ export function scenarioWarnings(
       }
     });
   }
+  warnings.push(...regressionToMeanWarnings(scenario, source), ...priceYearWarnings(scenario, raw, source), ...calibrationWarnings(scenario, source));
   return warnings;
+}
+
+/** Price years more than this far apart, with no escalation, deserve a warning. */
+export const MAX_UNESCALATED_PRICE_YEARS = 2;
+
+/**
+ * Sites with candidates whose baseline is their own observed counts. Candidate sites are usually
+ * flagged because their recent counts were high, and such counts overstate what comes next
+ * (regression to the mean; Hauer 1997, Observational Before-After Studies in Road Safety, ch. 5).
+ */
+function regressionToMeanWarnings(scenario: Scenario, source: YamlSource): InputProblem[] {
+  const performanceFunctions = new Map(scenario.catalogue.performanceFunctions.map((spf) => [spf.id, spf]));
+  const observed = scenario.sites.filter(
+    (site) =>
+      site.candidates.length > 0 &&
+      (scenario.baseline === "observed" || empiricalBayesGap(site, site.performanceFunction === undefined ? undefined : performanceFunctions.get(site.performanceFunction)) !== undefined),
+  );
+  if (observed.length === 0) return [];
+  const candidates = scenario.sites.filter((site) => site.candidates.length > 0).length;
+  const ids = observed.slice(0, 8).map((site) => site.id).join(", ") + (observed.length > 8 ? ", …" : "");
+  return [
+    {
+      code: "regression-to-mean",
+      file: source.file,
+      ...source.positionOf(scenario.baseline === "observed" ? ["baseline"] : ["sites"], true),
+      path: scenario.baseline === "observed" ? "baseline" : "sites",
+      message: `${observed.length} of ${candidates} candidate site(s) use their observed crash counts as the baseline (${ids}); sites picked for their high recent counts usually have fewer crashes next, so the K+A crashes avoided there are probably overstated (regression to the mean)`,
+      hint:
+        scenario.baseline === "observed"
+          ? "use baseline: auto, and give sites aadt and a performanceFunction, so Empirical Bayes corrects for it"
+          : "give these sites aadt and a performanceFunction (and lengthKm for segments) so Empirical Bayes corrects for it",
+    },
+  ];
+}
+
+/** Crash costs priced years away from the programme's money, with no escalation. */
+function priceYearWarnings(scenario: Scenario, raw: RawScenario, source: YamlSource): InputProblem[] {
+  const costs = scenario.economics.crashCosts;
+  if (costs.priceYear === undefined || raw.economics.crashCosts.escalation !== undefined) return [];
+  const stated = scenario.economics.priceYear;
+  const programmeYear = stated ?? scenario.crashWindow.lastYear + 1;
+  if (Math.abs(programmeYear - costs.priceYear) <= MAX_UNESCALATED_PRICE_YEARS) return [];
+  const which = stated === undefined ? `the programme (taken as ${programmeYear}, the year after the crash window; set economics.priceYear)` : `the programme's ${programmeYear} prices`;
+  return [
+    {
+      code: "price-year-gap",
+      file: source.file,
+      ...source.positionOf(["economics", "crashCosts", "priceYear"]),
+      path: "economics.crashCosts.priceYear",
+      message: `crash costs are in ${costs.priceYear} prices, ${Math.abs(programmeYear - costs.priceYear)} years from ${which}, and are not escalated, so every benefit-cost ratio mixes ${costs.priceYear} benefits with current capital costs`,
+      hint: "add crashCosts.escalation: { annualRate: 0.03 } (with economics.priceYear) or { baseIndex, targetIndex, source } from a price index",
+    },
+  ];
+}
+
+/** Calibration factors estimated from too few sites or crashes, and the bias of estimating on flagged sites. */
+function calibrationWarnings(scenario: Scenario, source: YamlSource): InputProblem[] {
+  return (scenario.calibrations ?? []).flatMap((calibration): InputProblem[] => {
+    if (calibration.method !== "estimated") return [];
+    const sites = calibration.sites ?? 0;
+    const crashes = calibration.observedCrashes ?? 0;
+    const small = sites < MIN_CALIBRATION_SITES || crashes < MIN_CALIBRATION_CRASHES;
+    return [
+      {
+        code: small ? "calibration-sample" : "calibration-bias",
+        file: source.file,
+        ...source.positionOf(["calibration", calibration.performanceFunction]),
+        path: `calibration.${calibration.performanceFunction}`,
+        message: `calibration factor for '${calibration.performanceFunction}' estimated as ${calibration.factor.toFixed(3)} from ${sites} site(s) and ${crashes} crash(es)${small ? `, fewer than the ${MIN_CALIBRATION_SITES} sites and ${MIN_CALIBRATION_CRASHES} crashes common practice asks for` : ""}; sites flagged for high counts also push the estimate up`,
+        hint: "estimate C from a random sample of the network's sites of this type and give it as a number",
+      },
+    ];
+  });
 }

@@ -18,7 +18,10 @@ export function planCsv(result: PlanResult): string {
     `npv_${currency}`,
     `cost_per_ksi_${currency}`,
     "must_fund",
+    "baseline",
+    "shared_crash_cells",
   ];
+  const methodBySite = new Map(result.prepared.baselines.map((baseline) => [baseline.site, baseline.method]));
   const rows = result.funded.map(({ entry, alternative }) => [
     entry.site.id,
     entry.site.name,
@@ -33,6 +36,8 @@ export function planCsv(result: PlanResult): string {
     alternative.npv,
     alternative.costPerKsi,
     entry.required ? "yes" : "no",
+    methodBySite.get(entry.site.id) ?? "",
+    alternative.sharedCells,
   ]);
   return toCsv(header, rows);
 }

@@ -1,3 +1,4 @@
+import { planMethodNotes } from "../analysis/planMethodNotes.js";
 import type { PlanResult } from "../analysis/planProgramme.js";
 import { CAUTIONS } from "./cautions.js";
 import { describeAssumptions } from "./describeAssumptions.js";
@@ -10,6 +11,8 @@ import { totalsJson } from "./totalsJson.js";
  */
 export function planJson(result: PlanResult): object {
   const { prepared, solution, totals } = result;
+  const methodBySite = new Map(prepared.baselines.map((baseline) => [baseline.site, baseline.method]));
+  const method = planMethodNotes(result);
   return {
     scenario: prepared.scenario.name,
     currency: prepared.scenario.currency,
@@ -32,11 +35,20 @@ export function planJson(result: PlanResult): object {
       npv: alternative.npv,
       costPerKsi: jsonNumber(alternative.costPerKsi),
       required: entry.required,
+      baseline: methodBySite.get(entry.site.id),
+      sharedCrashCells: alternative.sharedCells,
     })),
     bound: solution.bound,
     gap: solution.gap,
     budgetMarginalValue: solution.budgetMarginalValue,
     engine: solution.engine,
+    method: {
+      baselineCounts: method.baselineCounts,
+      observedBaselineProjects: method.observedBaselineProjects,
+      singleFatalCrashShare: { share: method.singleFatal.share, sites: method.singleFatal.sites, threshold: method.singleFatal.threshold, high: method.singleFatal.high, definition: method.singleFatal.definition },
+      sharedCellProjects: method.sharedCellProjects,
+      notes: method.notes,
+    },
     assumptions: describeAssumptions(prepared.scenario, prepared.baselines),
     cautions: CAUTIONS,
   };

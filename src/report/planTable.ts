@@ -1,4 +1,5 @@
 import Table from "cli-table3";
+import { planMethodNotes } from "../analysis/planMethodNotes.js";
 import type { PlanResult } from "../analysis/planProgramme.js";
 import { CAUTIONS } from "./cautions.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
@@ -8,18 +9,20 @@ import { hasList } from "./hasList.js";
 export function planTable(result: PlanResult, sections: readonly string[] = []): string {
   const { prepared, solution, totals } = result;
   const currency = prepared.scenario.currency;
+  const methodBySite = new Map(prepared.baselines.map((baseline) => [baseline.site, baseline.method === "empirical-bayes" ? "EB" : "observed"]));
   const table = new Table({
-    head: ["Site", "Name", "District", "Treatments", `Cost (${currency})`, "KSI avoided", "B/C", `NPV (${currency})`, `Cost per KSI (${currency})`],
-    colAligns: ["left", "left", "left", "left", "right", "right", "right", "right", "right"],
+    head: ["Site", "Name", "District", "Baseline", "Treatments", `Cost (${currency})`, "KSI avoided", "B/C", `NPV (${currency})`, `Cost per KSI (${currency})`],
+    colAligns: ["left", "left", "left", "left", "left", "right", "right", "right", "right", "right"],
     style: { head: [], border: [] },
     wordWrap: true,
-    colWidths: [null, 26, null, 34],
+    colWidths: [null, 26, null, null, 34],
   } as ConstructorParameters<typeof Table>[0]);
   for (const { entry, alternative } of result.funded) {
     table.push([
       entry.site.id + (entry.required ? " *" : ""),
       entry.site.name,
       entry.site.district,
+      methodBySite.get(entry.site.id) ?? "",
       alternative.treatments.join(" + "),
       formatMoney(alternative.cost),
       formatFixed(alternative.ksiAvoided, 2),
@@ -29,7 +32,7 @@ export function planTable(result: PlanResult, sections: readonly string[] = []):
     ]);
   }
   table.push([
-    { colSpan: 4, content: `Total: ${totals.projects} project(s)` },
+    { colSpan: 5, content: `Total: ${totals.projects} project(s)` },
     formatMoney(totals.cost),
     formatFixed(totals.ksiAvoided, 2),
     formatFixed(totals.bcRatio, 2),
@@ -49,6 +52,9 @@ export function planTable(result: PlanResult, sections: readonly string[] = []):
     hasList(result)
       ? `Optimality: upper bound ${formatFixed(solution.bound, 3)}, gap ${solution.gap.toExponential(1)} (engine: ${solution.engine}).`
       : `No list at this budget (status ${solution.status}, engine: ${solution.engine}).`,
+    "",
+    "Method notes:",
+    ...planMethodNotes(result).notes.map((note) => `- ${note}`),
     "",
     ...sections.flatMap((section) => [section, ""]),
     "Cautions:",

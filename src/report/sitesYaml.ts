@@ -18,6 +18,7 @@ export function sitesYaml(sites: readonly Site[], window: CrashWindow, provenanc
   for (const site of sites) {
     lines.push(`  - id: ${q(site.id)}`, `    name: ${q(site.name)}`, `    kind: ${site.kind}`, `    district: ${q(site.district)}`);
     if (site.tags.length > 0) lines.push(`    tags: [${site.tags.map(q).join(", ")}]`);
+    if (site.area !== undefined) lines.push(`    area: ${site.area}`);
     if (site.location) lines.push(`    location: { lon: ${round(site.location.lon, 6)}, lat: ${round(site.location.lat, 6)} }`);
     if (site.lengthKm !== undefined) lines.push(`    lengthKm: ${round(site.lengthKm, 3)}`);
     if (site.aadt !== undefined) lines.push(`    aadt: ${site.aadt}`);

@@ -69,6 +69,12 @@ const CASES: readonly Case[] = [
   { name: "duplicate-site-id", code: "duplicate-id", line: 19, column: 9, path: "sites[1].id" },
   { name: "not-applicable", code: "not-applicable", line: 18, column: 47, path: "sites[0].candidates[1]" },
   { name: "missing-length", code: "missing-length", line: 19, column: 5, path: "sites[1]" },
+  { name: "area-not-applicable", code: "not-applicable", line: 20, column: 34, path: "sites[0].candidates[1]" },
+  { name: "calibration-unknown-spf", code: "unknown-id", line: 12, column: 3, path: "calibration.urban-4sg-intersecton" },
+  // method options
+  { name: "ksi-costing-both", code: "rule-conflict", line: 11, column: 15, path: "economics.ksiCosting" },
+  { name: "escalation-no-price-year", code: "missing-price-year", line: 18, column: 17, path: "economics.crashCosts.escalation" },
+  { name: "cmf-combination-typo", code: "schema", line: 11, column: 25, path: "cmfCombination.rule" },
   // numbers
   { name: "negative-budget", code: "schema", line: 5, column: 9, path: "budget" },
   { name: "negative-count", code: "schema", line: 17, column: 24, path: "sites[0].crashes.pedestrian.A" },

@@ -78,3 +78,39 @@ describe("evaluateAlternative on a hand-worked case", () => {
     expect(result.benefitPV).toBeLessThan(0);
   });
 });
+
+describe("evaluateAlternative with the method options", () => {
+  it("traffic growth: each year's avoided crashes grow by the crash growth factor (year-by-year sum)", () => {
+    const growth = 1.02;
+    const result = evaluateAlternative(site, [t1], perYear, HAND_ECONOMICS, undefined, growth);
+    let ksi = 0;
+    let benefit = 0;
+    for (let year = 1; year <= 10; year++) {
+      ksi += 0.4 * Math.pow(growth, year);
+      benefit += (1_000_000 * Math.pow(growth, year)) / Math.pow(1.04, year);
+    }
+    expect(result.ksiAvoided).toBeCloseTo(ksi, 10);
+    expect(relative(result.benefitPV, benefit)).toBeLessThan(1e-10);
+    expect(result.crashesAvoidedPerYear.K).toBeCloseTo(0.08 * growth, 12);
+  });
+
+  it("renewal: a 10-year treatment renewed once acts all 20 years, and pays a second capital cost at year 10", () => {
+    // (P/A, 4%, 20) = 13.5903, (P/F, 4%, 10) = 0.6756 (4% interest table, from memory).
+    const result = evaluateAlternative(site, [t1], perYear, { ...HAND_ECONOMICS, renewal: "renew" });
+    expect(result.ksiAvoided).toBeCloseTo(0.4 * 20, 10);
+    expect(result.effectiveYears).toBe(20);
+    expect(relative(result.benefitPV, 1_000_000 * 13.5903)).toBeLessThan(1e-4);
+    expect(relative(result.lifecycleCostPV, 100_000 * (1 + 0.6756) + 2_000 * 13.5903)).toBeLessThan(1e-4);
+  });
+
+  it("combination rule: dominant effect counts only the stronger CMF in shared cells, and the shared cells are counted", () => {
+    const multiplied = evaluateAlternative(site, [t1, t2], perYear, HAND_ECONOMICS);
+    const dominant = evaluateAlternative(site, [t1, t2], perYear, { ...HAND_ECONOMICS, cmfCombination: { rule: "dominant-effect" } });
+    // Years 1-5: pedestrian cells take 0.6 (not 0.48): KSI 0.4/yr; years 6-10 as before.
+    expect(dominant.ksiAvoided).toBeCloseTo(0.4 * 10, 10);
+    expect(multiplied.ksiAvoided).toBeGreaterThan(dominant.ksiAvoided);
+    // Pedestrian K, A and B carry crashes and both treatments act there; angle O only t2.
+    expect(multiplied.sharedCells).toBe(3);
+    expect(evaluateAlternative(site, [t1], perYear, HAND_ECONOMICS).sharedCells).toBe(0);
+  });
+});

@@ -15,6 +15,8 @@ export interface FundedCase {
   readonly bcRank: number;
   /** Other alternatives at this site, not chosen because this one was. */
   readonly alternativesNotChosen: number;
+  /** Crash cells where two or more of its treatments act together (their combined CMF is the scenario's combination rule, not a measured effect). */
+  readonly sharedCrashCells: number;
 }
 
 /** Why a candidate site is not on the list. */
@@ -97,6 +99,7 @@ export function justifyPlan(result: PlanResult): PlanJustification {
     costPerKsi: alternative.costPerKsi,
     bcRank: rank.get(entry.site.id)!,
     alternativesNotChosen: entry.alternatives.length - 1,
+    sharedCrashCells: alternative.sharedCells,
   }));
 
   const fundedSites = new Set(result.funded.map((project) => project.entry.site.id));

@@ -16,7 +16,7 @@ export function justificationTable(planCase: PlanCase): string {
     funded.push([
       project.site,
       `${project.bcRank} of ${justification.funded.length}`,
-      project.alternativesNotChosen === 0 ? "" : `${project.alternativesNotChosen} not chosen`,
+      [project.alternativesNotChosen === 0 ? "" : `${project.alternativesNotChosen} not chosen`, project.sharedCrashCells === 0 ? "" : `treatments share ${project.sharedCrashCells} crash cell(s)`].filter((text) => text !== "").join("; "),
     ]);
   }
   const out = new Table({

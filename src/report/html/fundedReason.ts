@@ -23,6 +23,12 @@ export function fundedReason(scenario: Scenario, project: FundedProject, justifi
   if (justification.alternativesNotChosen > 0) {
     parts.push(` Chosen over ${justification.alternativesNotChosen} other option${justification.alternativesNotChosen === 1 ? "" : "s"} at this site.`);
   }
+  if (justification.sharedCrashCells > 0) {
+    const rule = scenario.economics.cmfCombination?.rule ?? "multiplicative";
+    parts.push(
+      ` Its treatments act together on ${justification.sharedCrashCells} crash type × severity cell${justification.sharedCrashCells === 1 ? "" : "s"}; their combined effect there follows the ${rule} rule, an assumption rather than a measured effect.`,
+    );
+  }
   // Only an upgrade that does not pay its way needs saying; the rest are read from the B/C.
   if (upgrade?.forKsiNotMoney === true && upgrade.stepFrom !== null && upgrade.incrementalBcRatio !== null) {
     const onMoney = upgrade.preferredOnMoney === null ? "" : `; on money alone the site would get ${treatmentNames(scenario, upgrade.preferredOnMoney)}`;

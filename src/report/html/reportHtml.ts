@@ -4,6 +4,7 @@ import { assumptionsSection } from "./assumptionsSection.js";
 import { budgetSection } from "./budgetSection.js";
 import { BUDGET_SLIDER_SCRIPT } from "./budgetSliderScript.js";
 import { capitalListSection } from "./capitalListSection.js";
+import { planMethodNotes } from "../../analysis/planMethodNotes.js";
 import { cautionsSection } from "./cautionsSection.js";
 import { escapeHtml } from "./escapeHtml.js";
 import { exportSection } from "./exportSection.js";
@@ -41,7 +42,7 @@ export function reportHtml(input: ReportInput): string {
 <p>Road-safety capital programme: the list of treatments to fund, what it achieves, and why.</p>
 </header>
 ${summarySection(input)}
-${cautionsSection()}
+${cautionsSection(planMethodNotes(input.plan).notes)}
 ${capitalListSection(input)}
 ${budgetSection(input)}
 <section id="map">

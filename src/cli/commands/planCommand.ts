@@ -52,7 +52,7 @@ export function registerPlanCommand(program: Command, io: CliIo): void {
       for (const warning of warnings) if (warning.code === "eb-fallback") io.stderr(`warning: ${formatProblem(warning)}\n`);
       const result = await planProgramme(preparePlan(scenario, objective), budget ?? scenario.budget, { engine });
       // Without a list there is nothing to justify: the diagnosis says why.
-      const planCase = format === "csv" || !hasList(result) ? undefined : casePlan(result);
+      const planCase = format === "csv" || !hasList(result) ? undefined : await casePlan(result, { engine });
       const content =
         format === "json"
           ? JSON.stringify({ ...planJson(result), justification: planCase ? justificationJson(planCase) : null }, null, 2) + "\n"

@@ -20,7 +20,7 @@ beforeAll(async () => {
   const { scenario } = loadScenario("scenarios/demo.yaml");
   const prepared = preparePlan(scenario);
   plan = await planProgramme(prepared);
-  planCase = casePlan(plan);
+  planCase = await casePlan(plan);
   base = { plan, planCase, frontier: [{ budget: plan.budget, plan }], warnings: [{ where: "demo.yaml:3:1", message: "a <b>warning</b>" }], csvFileName: "list.csv" };
   // Few draws keep the test quick; what is checked is that the report shows what the analysis found.
   const draws = await analyseUncertainty(prepared, { draws: 24, seed: 11, threads: 1, sampleBaselines: true, budget: plan.budget, solveOptions: {} });
@@ -68,7 +68,7 @@ describe("reportHtml: the case for the list (justification, upgrades, ranking)",
   it("flags an upgrade chosen for KSI, not money, with its incremental B/C (the demo has none)", async () => {
     // The upgrade adds 2 KSI worth 200 for 300 more lifecycle cost: ΔB/ΔC = 200/300 < 1 (HSM Part B, Ch. 7), yet it avoids more KSI.
     const flagged = await planProgramme(syntheticPlan([{ id: "A", options: [{ cost: 100, ksi: 5, benefit: 1000 }, { cost: 400, ksi: 7, benefit: 1200 }] }], 500));
-    const flaggedCase = casePlan(flagged);
+    const flaggedCase = await casePlan(flagged);
     expect(flaggedCase.upgrades.map((check) => check.forKsiNotMoney)).toEqual([true]);
     const html = capitalListSection({ plan: flagged, planCase: flaggedCase, frontier: [{ budget: 500, plan: flagged }], warnings: [], csvFileName: "x.csv" });
     expect(html.match(/<span class="tag flag"/g)).toHaveLength(1);

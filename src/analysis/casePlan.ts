@@ -16,6 +16,8 @@ export interface PlanCase {
   readonly atRankingSpend: OptimumAtRankingSpend;
   /** At equal spend (b): the ranking carried on by incremental B/C until the budget is used. */
   readonly extendedRanking: ExtendedRanking;
+  /** The plan's budget, at which the optimal list, the ranking and the carried-on ranking are drawn up. */
+  readonly budget: number;
   readonly currency: string;
   readonly objective: "ksi" | "benefit";
 }
@@ -32,6 +34,7 @@ export async function casePlan(result: PlanResult, solveOptions: Partial<SolveOp
     ranking,
     atRankingSpend: await optimumAtRankingSpend(result, ranking, solveOptions),
     extendedRanking: extendedRanking(result, ranking),
+    budget: result.budget,
     currency: result.prepared.scenario.currency,
     objective: result.prepared.objective,
   };

@@ -45,6 +45,28 @@ describe("reportHtml: the case for the list (justification, upgrades, ranking)",
     expect(html).toContain(`${planCase.ranking.rankingTotals.projects} projects, ${formatMoney(planCase.ranking.rankingTotals.cost)} USD spent`);
   });
 
+  it("shows both lists' spend and the comparison at equal spend, two ways", () => {
+    const html = reportHtml(base);
+    const gain = html.slice(html.indexOf('id="summary-gain"'), html.indexOf("</div>", html.indexOf('id="summary-gain"')));
+    const row = (list: string) => new RegExp(`<tr data-list="${list}">(.*?)</tr>`).exec(gain)![1]!;
+    const cells = (list: string) => [...row(list).matchAll(/<td class="num">([^<]*)<\/td>/g)].map((m) => m[1]);
+    const { ranking, atRankingSpend, extendedRanking } = planCase;
+    // Budget, spend, projects, K+A crashes avoided (one decimal), benefit PV: the analysis's own figures.
+    expect(cells("optimal")).toEqual([formatMoney(plan.budget), formatMoney(plan.totals.cost), String(plan.totals.projects), plan.totals.ksiAvoided.toFixed(1), formatMoney(plan.totals.benefitPV)]);
+    expect(cells("ranking").slice(0, 2)).toEqual([formatMoney(plan.budget), formatMoney(ranking.rankingTotals.cost)]);
+    // (a) solved with the budget set to the ranking's spend; (b) the ranking carried on within the full budget.
+    expect(cells("optimal-at-ranking-spend").slice(0, 2)).toEqual([formatMoney(ranking.rankingTotals.cost), formatMoney(atRankingSpend.plan.totals.cost)]);
+    expect(cells("extended-ranking").slice(0, 2)).toEqual([formatMoney(plan.budget), formatMoney(extendedRanking.totals.cost)]);
+    expect(Number(/data-extra-ksi-at-ranking-spend="([^"]+)"/.exec(gain)![1])).toBe(atRankingSpend.extraKsiAvoided);
+    expect(Number(/data-extra-ksi-over-extended="([^"]+)"/.exec(gain)![1])).toBe(extendedRanking.extraKsiAvoided);
+    // On the demo the plain ranking stops far short of the budget, so the equal-spend figures differ from the plain gain.
+    expect(ranking.rankingTotals.cost).toBeLessThan(0.8 * plan.totals.cost);
+    expect(atRankingSpend.extraKsiAvoided!).toBeGreaterThan(0);
+    expect(atRankingSpend.extraKsiAvoided!).toBeLessThan(ranking.extraKsiAvoided);
+    expect(extendedRanking.totals.cost).toBeGreaterThan(ranking.rankingTotals.cost);
+    expect(extendedRanking.totals.cost).toBeLessThanOrEqual(plan.budget);
+  });
+
   it("gives each funded project its B/C rank and cost per KSI from the justification", () => {
     const html = reportHtml(base);
     for (const project of planCase.justification.funded) {

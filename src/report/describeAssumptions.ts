@@ -1,6 +1,7 @@
 import { CMF_COMBINATION_RULE } from "../model/combineCmfs.js";
 import { SERVICE_LIFE_RULE } from "../model/evaluateAlternative.js";
 import type { Scenario } from "../model/types.js";
+import { KSI_AVOIDED_DEFINITION } from "./ksiAvoidedLabel.js";
 
 /** The assumptions behind every figure, as the JSON and reports state them. */
 export interface Assumptions {
@@ -31,6 +32,6 @@ export function describeAssumptions(scenario: Scenario): Assumptions {
     crashCostPriceYear: economics.crashCosts.priceYear ?? null,
     cmfCombination: CMF_COMBINATION_RULE,
     serviceLives: SERVICE_LIFE_RULE,
-    ksiDefinition: "KSI avoided counts crashes of KABCO severity K (fatal) and A (suspected serious injury) avoided over the service life within the analysis horizon",
+    ksiDefinition: KSI_AVOIDED_DEFINITION,
   };
 }

@@ -33,10 +33,10 @@ interface PlanOptions {
 export function registerPlanCommand(program: Command, io: CliIo): void {
   program
     .command("plan")
-    .description("choose the treatments to fund that avoid the most KSI crashes within the budget")
+    .description("choose the treatments to fund that avoid the most K+A (fatal and serious-injury) crashes within the budget")
     .argument("<scenario>", "scenario YAML file")
     .option("-b, --budget <amount>", "budget to use instead of the scenario's (4500000, 4.5M, 750k)")
-    .option("--objective <what>", "ksi (KSI crashes avoided) or benefit (monetised benefit PV)")
+    .option("--objective <what>", "ksi (K+A crashes avoided) or benefit (monetised benefit PV)")
     .option("-f, --format <format>", "table, json or csv", "table")
     .option("-o, --out <file>", "write to this file instead of standard output")
     .option("--force", "replace --out if it already exists")

@@ -50,7 +50,7 @@ ${item("Discount rate", `${formatFixed(assumptions.discountRate * 100, 1)}% a ye
 ${item("Analysis horizon", `${assumptions.horizonYears} years`)}
 ${item("Crash window", `${assumptions.crashWindow.firstYear}–${assumptions.crashWindow.lastYear}`)}
 ${item("Baseline method", escapeHtml(BASELINE_METHODS[assumptions.baseline] ?? assumptions.baseline))}
-${item("KSI", escapeHtml(assumptions.ksiDefinition))}
+${item("K+A crashes avoided", escapeHtml(assumptions.ksiDefinition))}
 ${item("Combining treatments", escapeHtml(assumptions.cmfCombination))}
 ${item("Service lives", escapeHtml(assumptions.serviceLives))}
 ${item("Treatments per site", `at most ${scenario.maxTreatmentsPerSite}`)}
@@ -80,7 +80,7 @@ function ruleText(rule: PolicyRule): string {
     case "spend-floor":
       return `Spend in ${scope(rule)} ${rule.kind === "spend-cap" ? "at most" : "at least"} ${rule.share !== undefined ? `${formatFixed(rule.share * 100, 1)}% of total spend` : formatMoney(rule.amount ?? 0)}`;
     case "ksi-share-floor":
-      return `KSI avoided in ${scope(rule)} at least ${formatFixed(rule.share * 100, 1)}% of all KSI avoided`;
+      return `K+A crashes avoided in ${scope(rule)} at least ${formatFixed(rule.share * 100, 1)}% of all K+A crashes avoided`;
     case "max-projects":
       return `At most ${rule.count} projects in ${scope(rule)}`;
   }

@@ -67,12 +67,12 @@ describe("reportHtml: the case for the list (justification, upgrades, ranking)",
     expect(extendedRanking.totals.cost).toBeLessThanOrEqual(plan.budget);
   });
 
-  it("gives each funded project its B/C rank and cost per KSI from the justification", () => {
+  it("gives each funded project its B/C rank and cost per K+A crash avoided from the justification", () => {
     const html = reportHtml(base);
     for (const project of planCase.justification.funded) {
       const block = projectBlock(html, "capital-list", project.site);
       expect(block).toMatch(new RegExp(`${project.bcRank}(st|nd|rd|th) of ${planCase.justification.funded.length} by B/C`));
-      expect(block).toContain(`${formatMoney(project.costPerKsi)} lifecycle cost per KSI avoided`);
+      expect(block).toContain(`${formatMoney(project.costPerKsi)} lifecycle cost per K+A crash avoided`);
     }
     expect(planCase.justification.funded.length).toBe(plan.funded.length);
   });
@@ -87,14 +87,14 @@ describe("reportHtml: the case for the list (justification, upgrades, ranking)",
     }
   });
 
-  it("flags an upgrade chosen for KSI, not money, with its incremental B/C (the demo has none)", async () => {
+  it("flags an upgrade chosen for K+A crashes avoided, not money, with its incremental B/C (the demo has none)", async () => {
     // The upgrade adds 2 KSI worth 200 for 300 more lifecycle cost: ΔB/ΔC = 200/300 < 1 (HSM Part B, Ch. 7), yet it avoids more KSI.
     const flagged = await planProgramme(syntheticPlan([{ id: "A", options: [{ cost: 100, ksi: 5, benefit: 1000 }, { cost: 400, ksi: 7, benefit: 1200 }] }], 500));
     const flaggedCase = await casePlan(flagged);
     expect(flaggedCase.upgrades.map((check) => check.forKsiNotMoney)).toEqual([true]);
     const html = capitalListSection({ plan: flagged, planCase: flaggedCase, frontier: [{ budget: 500, plan: flagged }], warnings: [], csvFileName: "x.csv" });
     expect(html.match(/<span class="tag flag"/g)).toHaveLength(1);
-    expect(html).toContain("Chosen for KSI, not money: the step up from t0 has incremental B/C 0.67, below 1; on money alone the site would get t0.");
+    expect(html).toContain("Chosen for K+A crashes avoided, not money: the step up from t0 has incremental B/C 0.67, below 1; on money alone the site would get t0.");
     expect(html).toContain("1 project is an upgrade whose extra cost");
   });
 

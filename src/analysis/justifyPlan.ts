@@ -60,7 +60,7 @@ export interface NotFundedCase {
 export interface PlanJustification {
   readonly funded: readonly FundedCase[];
   readonly notFunded: readonly NotFundedCase[];
-  /** λ: objective gained per extra currency unit of budget at the LP optimum; null when unknown. */
+  /** λ: objective (K+A crashes avoided, or benefit PV) gained per extra currency unit of budget at the LP optimum; null when unknown. */
   readonly budgetMarginalValue: number | null;
   /** Where λ came from. */
   readonly marginalValueSource: "solver" | "lp-relaxation" | "unavailable";
@@ -118,7 +118,7 @@ export function justifyPlan(result: PlanResult): PlanJustification {
     const bestBc = Math.max(...entry.alternatives.map((alternative) => alternative.bcRatio));
     const threshold = lambda === undefined ? null : entryThreshold(entry.alternatives, objective, lambda);
     if (entry.alternatives.every((alternative) => objectiveValue(alternative, objective) <= 0)) {
-      notFunded.push({ ...base, reason: "no-effect", explanation: `no alternative avoids any ${objective === "ksi" ? "KSI crash" : "crash cost"}`, bestBcRatio: bestBc, threshold: null });
+      notFunded.push({ ...base, reason: "no-effect", explanation: `no alternative avoids any ${objective === "ksi" ? "K+A crash" : "crash cost"}`, bestBcRatio: bestBc, threshold: null });
     } else if (bestBc < 1) {
       notFunded.push({ ...base, reason: "bc-below-1", explanation: `its best alternative has B/C ${bestBc.toFixed(2)}, below 1`, bestBcRatio: bestBc, threshold });
     } else {
@@ -152,7 +152,7 @@ export function entryThreshold(alternatives: readonly Alternative[], objective: 
 function budgetExplanation(threshold: EntryThreshold | null, objective: "ksi" | "benefit"): string {
   if (threshold === null) return "the budget, or a policy rule, left it out (no threshold: λ is unknown when rules bind through side constraints)";
   if (threshold.costCut <= 0) return "the budget ran out at the margin: past its LP threshold, but it does not fit the money left (an integer effect)";
-  const what = objective === "ksi" ? "KSI crashes" : "benefit PV";
+  const what = objective === "ksi" ? "K+A crashes" : "benefit PV";
   const extra = objective === "ksi" ? threshold.extraValueNeeded.toFixed(2) : Math.round(threshold.extraValueNeeded).toLocaleString("en-US");
   // A threshold at or below zero means no price cut alone brings it in.
   if (threshold.costThreshold <= 0) return `the budget ran out: ${threshold.treatments.join(" + ")} would enter only if it avoided at least ${extra} more ${what} at its cost; no price cut alone is enough`;

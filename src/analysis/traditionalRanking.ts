@@ -8,8 +8,12 @@ export interface RankingComparison {
   readonly definition: string;
   /** Sites the ranking funds, in the order it funded them. */
   readonly rankingSites: readonly string[];
+  /** The ranking's alternative index per site of the prepared plan (null: not funded). */
+  readonly rankingChoice: readonly (number | null)[];
   readonly rankingTotals: ProgrammeTotals;
-  /** Optimal KSI avoided minus the ranking's (positive: the optimal list avoids more). */
+  /** The optimal list's totals at the plan's budget, so both lists' spend sit side by side. */
+  readonly optimalTotals: ProgrammeTotals;
+  /** Optimal K+A crashes avoided minus the ranking's (positive: the optimal list avoids more). */
   readonly extraKsiAvoided: number;
   readonly extraBenefitPV: number;
   /** Whether the ranking's list also meets every policy rule (side constraints); the optimal list does. */
@@ -23,8 +27,10 @@ export const RANKING_DEFINITION =
   "(no benefit) are not funded. Policy rules other than must-fund and never-fund are not applied; whether the result meets them is reported.";
 
 /**
- * The traditional B/C ranking at the plan's budget (see RANKING_DEFINITION), and how many more KSI
- * the optimal list avoids than it does.
+ * The traditional B/C ranking at the plan's budget (see RANKING_DEFINITION), and how many more K+A
+ * crashes the optimal list avoids than it does. It stops where the next site does not fit, so it
+ * usually spends less than the optimal list: see `optimumAtRankingSpend` and `extendedRanking` for
+ * the comparisons at equal spend.
  */
 export function traditionalRanking(result: PlanResult): RankingComparison {
   const { prepared, programme } = result;
@@ -60,7 +66,9 @@ export function traditionalRanking(result: PlanResult): RankingComparison {
   return {
     definition: RANKING_DEFINITION,
     rankingSites: order,
+    rankingChoice: choice,
     rankingTotals: totals,
+    optimalTotals: result.totals,
     extraKsiAvoided: result.totals.ksiAvoided - totals.ksiAvoided,
     extraBenefitPV: result.totals.benefitPV - totals.benefitPV,
     rankingMeetsRules: checkSolution({ ...programme, budget: result.budget }, choice).feasible,

@@ -10,7 +10,7 @@ export interface UpgradeCheck {
   readonly stepFrom: readonly string[] | null;
   /** ΔB/ΔC from `stepFrom` to the chosen alternative; null when the chosen one is the cheapest. */
   readonly incrementalBcRatio: number | null;
-  /** The chosen upgrade does not pay for its extra cost (ΔB/ΔC < 1, or no extra benefit at all): chosen for KSI, not money. */
+  /** The chosen upgrade does not pay for its extra cost (ΔB/ΔC < 1, or no extra benefit at all): chosen for K+A crashes avoided, not money. */
   readonly forKsiNotMoney: boolean;
   /** The alternative the HSM challenger–defender procedure prefers on money alone, or null if none has B/C ≥ 1. */
   readonly preferredOnMoney: readonly string[] | null;

@@ -18,7 +18,7 @@ export const EXIT_BAD_INPUT = 2;
 /** Builds the command tree; every command writes through `io`. */
 export function createProgram(io: CliIo): Command {
   const program = new Command("averta")
-    .description("Choose the road-safety capital list that avoids the most killed and seriously injured (KSI) crashes within budget.")
+    .description("Choose the road-safety capital list that avoids the most K+A crashes (KSI crashes: a fatality or a serious injury; crashes, not people) within budget.")
     .version("0.1.0")
     .showHelpAfterError("(run with --help for usage)")
     .configureOutput({ writeOut: io.stdout, writeErr: io.stderr })

@@ -3,6 +3,7 @@ import type { ProgrammeTotals } from "../analysis/summariseSelection.js";
 import { CAUTIONS } from "./cautions.js";
 import type { CompareLabels } from "./compareTable.js";
 import { jsonNumber } from "./formatNumber.js";
+import { KSI_AVOIDED_DEFINITION } from "./ksiAvoidedLabel.js";
 
 /** A what-if comparison as a JSON document; deltas are B − A; undefined or infinite ratios are null. */
 export function compareJson(comparison: PlanComparison, labels: CompareLabels): object {
@@ -21,6 +22,7 @@ export function compareJson(comparison: PlanComparison, labels: CompareLabels): 
     entering: comparison.entering,
     leaving: comparison.leaving,
     changedTreatment: comparison.changed,
+    definitions: { ksiAvoided: KSI_AVOIDED_DEFINITION, spend: `capital cost of the list, in ${labels.currency}`, change: "B − A" },
     cautions: CAUTIONS,
   };
 }

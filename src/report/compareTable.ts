@@ -2,6 +2,7 @@ import Table from "cli-table3";
 import type { PlanComparison } from "../analysis/comparePlans.js";
 import { CAUTIONS } from "./cautions.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
+import { KSI_AVOIDED_LABEL } from "./ksiAvoidedLabel.js";
 
 /** Names the two sides of a comparison, e.g. "budget 5,000,000" and "budget 9,700,000". */
 export interface CompareLabels {
@@ -23,13 +24,13 @@ export function compareTable(comparison: PlanComparison, labels: CompareLabels):
     ["Status", comparison.sideA.status, comparison.sideB.status, ""],
     [`Spend (${labels.currency})`, formatMoney(totalsA.cost), formatMoney(totalsB.cost), signed(formatMoney(delta.spend), delta.spend)],
     ["Projects", String(totalsA.projects), String(totalsB.projects), signed(String(delta.projects), delta.projects)],
-    ["KSI avoided", formatFixed(totalsA.ksiAvoided, 2), formatFixed(totalsB.ksiAvoided, 2), signed(formatFixed(delta.ksiAvoided, 2), delta.ksiAvoided)],
+    [KSI_AVOIDED_LABEL, formatFixed(totalsA.ksiAvoided, 2), formatFixed(totalsB.ksiAvoided, 2), signed(formatFixed(delta.ksiAvoided, 2), delta.ksiAvoided)],
     [`Benefit PV (${labels.currency})`, formatMoney(totalsA.benefitPV), formatMoney(totalsB.benefitPV), signed(formatMoney(delta.benefitPV), delta.benefitPV)],
     ["B/C", formatFixed(totalsA.bcRatio, 2), formatFixed(totalsB.bcRatio, 2), signed(formatFixed(delta.bcRatio, 2), delta.bcRatio)],
   );
   const projectTable = (rows: readonly { site: string; name: string; treatments: string; cost: string; ksi: string }[]) => {
     const table = new Table({
-      head: ["Site", "Name", "Treatments", `Cost (${labels.currency})`, "KSI avoided"],
+      head: ["Site", "Name", "Treatments", `Cost (${labels.currency})`, KSI_AVOIDED_LABEL],
       colAligns: ["left", "left", "left", "right", "right"],
       style: { head: [], border: [] },
       wordWrap: true,

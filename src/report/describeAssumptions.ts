@@ -2,6 +2,7 @@ import { describeCmfCombination } from "../model/combineCmfs.js";
 import { describeServiceLives } from "../model/evaluateAlternative.js";
 import { describeTrafficGrowth, type SiteBaseline } from "../model/siteBaselines.js";
 import type { Scenario } from "../model/types.js";
+import { KSI_AVOIDED_DEFINITION } from "./ksiAvoidedLabel.js";
 
 /** How many sites used each baseline method. */
 export interface BaselineCounts {
@@ -34,9 +35,6 @@ export interface Assumptions {
   readonly ksiDefinition: string;
 }
 
-export const KSI_DEFINITION =
-  "K+A crashes avoided (KSI crashes): crashes of KABCO severity K (fatal) or A (suspected serious injury) avoided over the service life within the analysis horizon; it counts crashes, not people";
-
 /** Collects the scenario's economic and method assumptions in one plain object. */
 export function describeAssumptions(scenario: Scenario, baselines?: readonly SiteBaseline[]): Assumptions {
   const { economics } = scenario;
@@ -63,7 +61,7 @@ export function describeAssumptions(scenario: Scenario, baselines?: readonly Sit
     serviceLives: describeServiceLives(economics.renewal ?? "none"),
     trafficGrowth: describeTrafficGrowth(economics.trafficGrowthRate ?? 0),
     calibration: describeCalibration(scenario),
-    ksiDefinition: KSI_DEFINITION,
+    ksiDefinition: KSI_AVOIDED_DEFINITION,
   };
 }
 

@@ -2,6 +2,7 @@ import type { FrontierSummary } from "../analysis/summariseFrontier.js";
 import { CAUTIONS } from "./cautions.js";
 import type { FrontierContext } from "./frontierTable.js";
 import { jsonNumber } from "./formatNumber.js";
+import { KSI_AVOIDED_DEFINITION } from "./ksiAvoidedLabel.js";
 
 /** The budget frontier as a JSON document; undefined or infinite ratios are null. */
 export function frontierJson(summary: FrontierSummary, context: FrontierContext): object {
@@ -10,7 +11,7 @@ export function frontierJson(summary: FrontierSummary, context: FrontierContext)
     currency: context.currency,
     objective: context.objective,
     scenarioBudget: context.scenarioBudget,
-    marginalRateDefinition: "KSI avoided gained per extra 1,000,000 of budget since the previous level",
+    marginalRateDefinition: `marginalKsiPerMillion: K+A crashes avoided gained per extra 1,000,000 ${context.currency} of budget since the previous level`,
     referenceKsiPerMillion: summary.referenceKsiPerMillion,
     referenceDefinition: "the marginal rate of the first rising budget step (the 'first 1M')",
     diminishingFrom: summary.diminishingFrom,
@@ -25,6 +26,7 @@ export function frontierJson(summary: FrontierSummary, context: FrontierContext)
       marginalKsiPerMillion: row.marginalKsiPerMillion === null ? null : jsonNumber(row.marginalKsiPerMillion),
       belowHalfOfFirst: row.diminishing,
     })),
+    definitions: { ksiAvoided: KSI_AVOIDED_DEFINITION, spend: `capital cost of the optimal list at the level, in ${context.currency}` },
     cautions: CAUTIONS,
   };
 }

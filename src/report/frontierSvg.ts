@@ -14,7 +14,7 @@ const INK = "#222222";
 const GRID = "#DDDDDD";
 
 /**
- * The budget frontier as a self-contained SVG: KSI avoided against budget as a step curve (the
+ * The budget frontier as a self-contained SVG: K+A crashes avoided against budget as a step curve (the
  * optimum at a level holds until the next level is reached), axes with ticks and labels, and the
  * scenario's own budget marked by a dashed line. Accessible (role="img", title and desc), no
  * external fonts, styles or scripts. Pure: summary in, text out.
@@ -41,11 +41,11 @@ export function frontierSvg(summary: FrontierSummary, context: FrontierContext):
     if (index === 0) path.push(`M${n(x(row.budget))},${n(y(row.ksiAvoided))}`);
     else path.push(`H${n(x(row.budget))}`, `V${n(y(row.ksiAvoided))}`);
   });
-  const title = `Budget frontier: KSI crashes avoided against budget, ${context.scenarioName}`;
+  const title = `Budget frontier: K+A crashes avoided against budget, ${context.scenarioName}`;
   const last = rows.at(-1);
   const desc =
-    `Step chart of the most KSI crashes avoided that each budget from ${formatMoney(rows[0]?.budget ?? 0)} to ${formatMoney(last?.budget ?? 0)} ${context.currency} can buy, ` +
-    `solved at ${rows.length} levels. At the top level ${formatFixed(last?.ksiAvoided ?? 0, 1)} KSI crashes are avoided. ` +
+    `Step chart of the most K+A crashes avoided that each budget from ${formatMoney(rows[0]?.budget ?? 0)} to ${formatMoney(last?.budget ?? 0)} ${context.currency} can buy, ` +
+    `solved at ${rows.length} levels. At the top level ${formatFixed(last?.ksiAvoided ?? 0, 1)} K+A crashes are avoided. ` +
     `The scenario's budget of ${formatMoney(context.scenarioBudget)} is marked with a dashed line.` +
     (summary.diminishingFrom === null ? "" : ` Past ${formatMoney(summary.diminishingFrom)}, each further million buys less than half of what the first million bought.`);
 
@@ -55,7 +55,7 @@ export function frontierSvg(summary: FrontierSummary, context: FrontierContext):
     `<desc id="frontier-desc">${escapeXml(desc)}</desc>`,
     `<rect width="${WIDTH}" height="${HEIGHT}" fill="#FFFFFF"/>`,
     `<text x="${MARGIN.left}" y="24" font-size="15" font-weight="bold">${escapeXml(`Budget frontier: ${context.scenarioName}`)}</text>`,
-    `<text x="${MARGIN.left}" y="42">Most KSI crashes avoided at each budget (optimal list per level)</text>`,
+    `<text x="${MARGIN.left}" y="42">Most K+A crashes avoided at each budget (optimal list per level)</text>`,
   ];
   for (const tick of yTicks) {
     parts.push(
@@ -73,9 +73,9 @@ export function frontierSvg(summary: FrontierSummary, context: FrontierContext):
     `<line x1="${MARGIN.left}" x2="${MARGIN.left + plotW}" y1="${MARGIN.top + plotH}" y2="${MARGIN.top + plotH}" stroke="${INK}"/>`,
     `<line x1="${MARGIN.left}" x2="${MARGIN.left}" y1="${MARGIN.top}" y2="${MARGIN.top + plotH}" stroke="${INK}"/>`,
     `<text x="${MARGIN.left + plotW / 2}" y="${HEIGHT - 16}" text-anchor="middle">${escapeXml(`Budget (${context.currency})`)}</text>`,
-    `<text transform="translate(18 ${MARGIN.top + plotH / 2}) rotate(-90)" text-anchor="middle">KSI crashes avoided</text>`,
+    `<text transform="translate(18 ${MARGIN.top + plotH / 2}) rotate(-90)" text-anchor="middle">K+A crashes avoided</text>`,
     `<path d="${path.join(" ")}" fill="none" stroke="${CURVE}" stroke-width="2.5"/>`,
-    ...rows.map((row) => `<circle cx="${n(x(row.budget))}" cy="${n(y(row.ksiAvoided))}" r="3" fill="${CURVE}"><title>${escapeXml(`${formatMoney(row.budget)}: ${formatFixed(row.ksiAvoided, 1)} KSI avoided`)}</title></circle>`),
+    ...rows.map((row) => `<circle cx="${n(x(row.budget))}" cy="${n(y(row.ksiAvoided))}" r="3" fill="${CURVE}"><title>${escapeXml(`${formatMoney(row.budget)}: ${formatFixed(row.ksiAvoided, 1)} K+A crashes avoided`)}</title></circle>`),
     `<line x1="${n(x(context.scenarioBudget))}" x2="${n(x(context.scenarioBudget))}" y1="${MARGIN.top}" y2="${MARGIN.top + plotH}" stroke="${MARK}" stroke-width="2" stroke-dasharray="6 4"/>`,
     `<text x="${n(x(context.scenarioBudget) + 6)}" y="${MARGIN.top + 14}" fill="${MARK}">${escapeXml(`scenario budget ${compactMoney(context.scenarioBudget)}`)}</text>`,
     "</svg>",

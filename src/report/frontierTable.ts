@@ -2,6 +2,7 @@ import Table from "cli-table3";
 import type { FrontierSummary } from "../analysis/summariseFrontier.js";
 import { CAUTIONS } from "./cautions.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
+import { KSI_AVOIDED_LABEL } from "./ksiAvoidedLabel.js";
 
 /** What a frontier report needs besides the rows. */
 export interface FrontierContext {
@@ -16,7 +17,7 @@ export interface FrontierContext {
 export function frontierTable(summary: FrontierSummary, context: FrontierContext): string {
   const { currency } = context;
   const table = new Table({
-    head: [`Budget (${currency})`, "Status", `Spend (${currency})`, "Projects", "KSI avoided", `Benefit PV (${currency})`, "B/C", "KSI per extra 1M", ""],
+    head: [`Budget (${currency})`, "Status", `Spend (${currency})`, "Projects", KSI_AVOIDED_LABEL, `Benefit PV (${currency})`, "B/C", `K+A crashes avoided per extra 1M ${currency}`, ""],
     colAligns: ["right", "left", "right", "right", "right", "right", "right", "right", "left"],
     style: { head: [], border: [] },
   } as ConstructorParameters<typeof Table>[0]);
@@ -35,14 +36,14 @@ export function frontierTable(summary: FrontierSummary, context: FrontierContext
   }
   const reference = summary.referenceKsiPerMillion;
   const lines = [
-    `${context.scenarioName}: budget frontier (${context.objective === "ksi" ? "maximising KSI crashes avoided" : "maximising benefit PV"} at each level)`,
+    `${context.scenarioName}: budget frontier (${context.objective === "ksi" ? "maximising K+A crashes avoided" : "maximising benefit PV"} at each level)`,
     `Scenario budget ${formatMoney(context.scenarioBudget)} ${currency}.`,
     "",
     table.toString(),
-    "KSI per extra 1M = (KSI avoided at this level − at the previous level) ÷ (budget step in millions).",
+    `K+A crashes avoided per extra 1M ${currency} = (K+A crashes avoided at this level − at the previous level) ÷ (budget step in millions of ${currency}).`,
     reference === null
       ? "No rising budget step, so no diminishing-returns reading."
-      : `"First 1M" = the first step's rate, ${formatFixed(reference, 2)} KSI avoided per 1M; "< half" marks steps that buy less than half of it.`,
+      : `"First 1M" = the first step's rate, ${formatFixed(reference, 2)} K+A crashes avoided per extra 1M ${currency}; "< half" marks steps that buy less than half of it.`,
     summary.diminishingFrom === null
       ? "No point past which every further step buys less than half the first step's rate."
       : `Past ${formatMoney(summary.diminishingFrom)} ${currency}, every further 1M buys less than half of what the first 1M bought.`,

@@ -1,12 +1,16 @@
 import Table from "cli-table3";
 import type { PlanCase } from "../analysis/casePlan.js";
+import type { ProgrammeTotals } from "../analysis/summariseSelection.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
+import { KSI_AVOIDED_LABEL } from "./ksiAvoidedLabel.js";
+import { marginalValueWords } from "./marginalValueWords.js";
+import { rankingComparisonText } from "./rankingComparisonText.js";
 
-/** The justification section of `plan`'s table: the case for each funded project, why the rest are out, upgrades and the ranking comparison. */
+/** The justification section of `plan`'s table: the case for each funded project, why the rest are out, upgrades and the ranking comparison at equal spend. */
 export function justificationTable(planCase: PlanCase): string {
-  const { justification, upgrades, ranking, currency } = planCase;
+  const { justification, upgrades, ranking, atRankingSpend, extendedRanking, currency } = planCase;
   const style = { head: [], border: [] };
-  // B/C, NPV and cost per KSI are in the list above; this table adds what the list cannot show.
+  // B/C, NPV and cost per K+A crash are in the list above; this table adds what the list cannot show.
   const funded = new Table({
     head: ["Site", "B/C rank", "Other alternatives at the site"],
     colAligns: ["left", "right", "right"],
@@ -29,8 +33,9 @@ export function justificationTable(planCase: PlanCase): string {
   for (const site of justification.notFunded) out.push([site.site, site.name, site.explanation]);
 
   const lambda = justification.budgetMarginalValue;
-  const unit = planCase.objective === "ksi" ? "KSI avoided" : "benefit PV";
+  const unit = planCase.objective === "ksi" ? "K+A crash avoided" : `${currency} of benefit PV`;
   const flagged = upgrades.filter((check) => check.forKsiNotMoney);
+  const text = rankingComparisonText(planCase);
   const lines = [
     "Why these projects",
     funded.toString(),
@@ -42,23 +47,55 @@ export function justificationTable(planCase: PlanCase): string {
     justification.notFunded.length === 0 ? "Every candidate site is funded." : out.toString(),
     lambda === null
       ? "No entry thresholds: the budget's marginal value is unknown for this programme (policy rules also price the margin)."
-      : `Thresholds use the budget's marginal value λ = ${formatFixed(lambda * 1e6, 3)} ${unit} per 1M (${justification.marginalValueSource}), i.e. ${formatMoney(lambda > 0 ? 1 / lambda : Infinity)} ${currency} per unit of ${unit} at the margin.`,
+      : `Thresholds use the budget's marginal value λ = ${marginalValueWords(lambda, planCase.objective, currency)} at the margin (from the ${justification.marginalValueSource === "solver" ? "solver" : "LP relaxation"}), ` +
+        `i.e. about ${formatMoney(lambda > 0 ? 1 / lambda : Infinity)} ${currency} of budget per extra ${unit}.`,
     `Method: ${justification.method}`,
     "",
     "Upgrades by incremental B/C (Highway Safety Manual, Part B, Chapter 7)",
-    upgrades.length === 0 ? "No funded site had more than one alternative." : `${upgrades.length} funded site(s) had several alternatives; ${flagged.length} chosen upgrade(s) have incremental B/C below 1 over the next cheaper alternative (chosen for KSI, not money)${flagged.length > 0 ? ":" : "."}`,
+    upgrades.length === 0 ? "No funded site had more than one alternative." : `${upgrades.length} funded site(s) had several alternatives; ${flagged.length} chosen upgrade(s) have incremental B/C below 1 over the next cheaper alternative (chosen for K+A crashes avoided, not money)${flagged.length > 0 ? ":" : "."}`,
     ...flagged.map(
       (check) =>
         `- ${check.site} ${check.name}: ${check.chosen.join(" + ")} over ${check.stepFrom?.join(" + ") ?? "nothing"}, incremental B/C ${formatFixed(check.incrementalBcRatio ?? Number.NaN, 2)}` +
         (check.preferredOnMoney === null ? "" : `; on money alone: ${check.preferredOnMoney.join(" + ")}`),
     ),
     "",
-    "Against a B/C ranking at the same budget",
-    `The ranking funds ${ranking.rankingTotals.projects} project(s) for ${formatMoney(ranking.rankingTotals.cost)} ${currency} and avoids ${formatFixed(ranking.rankingTotals.ksiAvoided, 2)} KSI; ` +
-      `the optimal list avoids ${formatFixed(ranking.extraKsiAvoided, 2)} more KSI (benefit PV ${ranking.extraBenefitPV >= 0 ? "+" : ""}${formatMoney(ranking.extraBenefitPV)}).` +
-      (ranking.rankingMeetsRules ? "" : " The ranking's list breaks at least one policy rule."),
+    "Against a B/C ranking at the same budget, and at equal spend",
+    rankingTable(planCase),
+    text.asTheyStand,
+    text.atRankingSpend,
+    text.extended,
+    ...(text.split === null ? [] : [text.split]),
     `Ranking used: ${ranking.definition}`,
+    `At the ranking's spend: ${atRankingSpend.definition}`,
+    `Ranking carried on: ${extendedRanking.definition}`,
   ];
   // No trailing newline: planTable separates sections itself.
   return lines.join("\n");
+}
+
+/** The four lists side by side: budget, spend, projects, K+A crashes avoided, benefit PV, B/C and whether each meets the rules. */
+function rankingTable(planCase: PlanCase): string {
+  const { ranking, atRankingSpend, extendedRanking, currency } = planCase;
+  const atSpend = atRankingSpend.extraKsiAvoided === null ? null : atRankingSpend.plan.totals;
+  const table = new Table({
+    head: ["", "Optimal list", "B/C ranking", "Optimal at the ranking's spend", "Ranking carried on (incremental B/C)"],
+    colAligns: ["left", "right", "right", "right", "right"],
+    style: { head: [], border: [] },
+  } as ConstructorParameters<typeof Table>[0]);
+  const lists: readonly (ProgrammeTotals | null)[] = [ranking.optimalTotals, ranking.rankingTotals, atSpend, extendedRanking.totals];
+  const row = (label: string, cell: (totals: ProgrammeTotals) => string) => [label, ...lists.map((totals) => (totals === null ? "no list" : cell(totals)))];
+  table.push(
+    [`Budget (${currency})`, formatMoney(planCase.budget), formatMoney(planCase.budget), formatMoney(atRankingSpend.budget), formatMoney(planCase.budget)],
+    row(`Spend (${currency})`, (totals) => formatMoney(totals.cost)),
+    row("Projects", (totals) => String(totals.projects)),
+    row(KSI_AVOIDED_LABEL, (totals) => formatFixed(totals.ksiAvoided, 2)),
+    row(`Benefit PV (${currency})`, (totals) => formatMoney(totals.benefitPV)),
+    row("B/C", (totals) => formatFixed(totals.bcRatio, 2)),
+    ["Meets the policy rules", "yes", yesNo(ranking.rankingMeetsRules), atSpend === null ? "no list" : "yes", yesNo(extendedRanking.meetsRules)],
+  );
+  return table.toString();
+}
+
+function yesNo(flag: boolean): string {
+  return flag ? "yes" : "no";
 }

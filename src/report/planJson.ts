@@ -3,11 +3,14 @@ import type { PlanResult } from "../analysis/planProgramme.js";
 import { CAUTIONS } from "./cautions.js";
 import { describeAssumptions } from "./describeAssumptions.js";
 import { jsonNumber } from "./formatNumber.js";
+import { COST_PER_KSI_DEFINITION, KSI_AVOIDED_DEFINITION, KSI_AVOIDED_PER_YEAR_DEFINITION } from "./ksiAvoidedLabel.js";
+import { marginalValueDefinition } from "./marginalValueWords.js";
 import { totalsJson } from "./totalsJson.js";
 
 /**
  * The stable JSON contract of `plan --format json`. Money is in currency units; ratios that
- * are undefined or infinite are null.
+ * are undefined or infinite are null. `definitions` says in words what the K+A figures and the
+ * budget's marginal value mean (the keys keep their names: they are a contract).
  */
 export function planJson(result: PlanResult): object {
   const { prepared, solution, totals } = result;
@@ -42,6 +45,12 @@ export function planJson(result: PlanResult): object {
     gap: solution.gap,
     budgetMarginalValue: solution.budgetMarginalValue,
     engine: solution.engine,
+    definitions: {
+      ksiAvoided: KSI_AVOIDED_DEFINITION,
+      ksiAvoidedPerYear: KSI_AVOIDED_PER_YEAR_DEFINITION,
+      costPerKsi: COST_PER_KSI_DEFINITION,
+      budgetMarginalValue: marginalValueDefinition(prepared.objective, prepared.scenario.currency),
+    },
     method: {
       baselineCounts: method.baselineCounts,
       observedBaselineProjects: method.observedBaselineProjects,

@@ -4,6 +4,7 @@ import type { PlanResult } from "../analysis/planProgramme.js";
 import { CAUTIONS } from "./cautions.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
 import { hasList } from "./hasList.js";
+import { KSI_AVOIDED_LABEL } from "./ksiAvoidedLabel.js";
 
 /** The funded list as a terminal table, with totals against the budget, any extra sections (before the cautions) and the cautions. */
 export function planTable(result: PlanResult, sections: readonly string[] = []): string {
@@ -11,7 +12,7 @@ export function planTable(result: PlanResult, sections: readonly string[] = []):
   const currency = prepared.scenario.currency;
   const methodBySite = new Map(prepared.baselines.map((baseline) => [baseline.site, baseline.method === "empirical-bayes" ? "EB" : "observed"]));
   const table = new Table({
-    head: ["Site", "Name", "District", "Baseline", "Treatments", `Cost (${currency})`, "KSI avoided", "B/C", `NPV (${currency})`, `Cost per KSI (${currency})`],
+    head: ["Site", "Name", "District", "Baseline", "Treatments", `Cost (${currency})`, KSI_AVOIDED_LABEL, "B/C", `NPV (${currency})`, `Cost per K+A crash avoided (${currency})`],
     colAligns: ["left", "left", "left", "left", "left", "right", "right", "right", "right", "right"],
     style: { head: [], border: [] },
     wordWrap: true,
@@ -42,9 +43,9 @@ export function planTable(result: PlanResult, sections: readonly string[] = []):
 
   const lines = [
     `${prepared.scenario.name}`,
-    `Objective: ${prepared.objective === "ksi" ? "KSI crashes avoided" : "benefit PV"}   Baseline: ${prepared.scenario.baseline}   Status: ${solution.status}${solution.status === "optimal" ? " (proven)" : ""}`,
+    `Objective: ${prepared.objective === "ksi" ? "K+A crashes avoided (KSI crashes, not people)" : "benefit PV"}   Baseline: ${prepared.scenario.baseline}   Status: ${solution.status}${solution.status === "optimal" ? " (proven)" : ""}`,
     `Budget ${formatMoney(result.budget)} ${currency}; spent ${formatMoney(totals.cost)} (${formatFixed(result.budget > 0 ? (100 * totals.cost) / result.budget : 0, 1)}%); left ${formatMoney(result.budget - totals.cost)}`,
-    `KSI avoided ${formatFixed(totals.ksiAvoided, 2)} over the analysis period (${formatFixed(totals.ksiAvoidedPerYear, 2)} a year at first); benefit PV ${formatMoney(totals.benefitPV)}; lifecycle cost PV ${formatMoney(totals.lifecycleCostPV)}`,
+    `K+A crashes avoided ${formatFixed(totals.ksiAvoided, 2)} over the analysis period (${formatFixed(totals.ksiAvoidedPerYear, 2)} a year at first); benefit PV ${formatMoney(totals.benefitPV)}; lifecycle cost PV ${formatMoney(totals.lifecycleCostPV)}`,
     ...(solution.diagnosis ? [`Why: ${solution.diagnosis}`] : []),
     "",
     hasList(result) ? table.toString() : "",

@@ -7,7 +7,7 @@ export function screenJson(screening: NetworkScreening, scenarioName: string): u
   const optional = (x: number | undefined) => (x === undefined ? null : jsonNumber(x));
   return {
     scenario: scenarioName,
-    measure: "excess expected KSI crashes per year (Empirical Bayes expected minus SPF predicted, K+A)",
+    measure: "excess expected K+A crashes per year (KSI crashes: Empirical Bayes expected minus SPF predicted; crashes of severity K or A, not people)",
     proposed: screening.proposed,
     sites: screening.sites.map((e) => ({
       site: e.site.id,

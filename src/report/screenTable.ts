@@ -6,7 +6,7 @@ import { formatFixed } from "./formatNumber.js";
 /** The screening ranking as a terminal table (the first `rows` sites), with the proposal and cautions. */
 export function screenTable(screening: NetworkScreening, title: string, rows: number): string {
   const table = new Table({
-    head: ["Rank", "Site", "Name", "District", "KSI/yr observed", "KSI/yr predicted", "KSI/yr EB expected", "Excess KSI/yr", "Rank by observed"],
+    head: ["Rank", "Site", "Name", "District", "K+A crashes/yr observed", "K+A crashes/yr predicted", "K+A crashes/yr EB expected", "Excess K+A crashes/yr", "Rank by observed"],
     colAligns: ["right", "left", "left", "left", "right", "right", "right", "right", "right"],
     style: { head: [], border: [] },
     wordWrap: true,
@@ -19,10 +19,10 @@ export function screenTable(screening: NetworkScreening, title: string, rows: nu
   const withoutEb = screening.sites.filter((entry) => entry.note !== undefined);
   return [
     `Network screening: ${title}`,
-    "Ranked by excess expected KSI crashes a year (Empirical Bayes expected minus SPF predicted, K+A).",
+    "Ranked by excess expected K+A crashes a year (KSI crashes: Empirical Bayes expected minus SPF predicted; crashes, not people).",
     table.toString(),
     `Proposed for the programme (top ${screening.proposed.length} by excess): ${screening.proposed.join(", ") || "none"}`,
-    ...(withoutEb.length > 0 ? [`${withoutEb.length} site(s) have no EB estimate and rank last, by observed KSI: ${withoutEb.slice(0, 5).map((e) => `${e.site.id} (${e.note})`).join("; ")}${withoutEb.length > 5 ? "; …" : ""}`] : []),
+    ...(withoutEb.length > 0 ? [`${withoutEb.length} site(s) have no EB estimate and rank last, by observed K+A crashes: ${withoutEb.slice(0, 5).map((e) => `${e.site.id} (${e.note})`).join("; ")}${withoutEb.length > 5 ? "; …" : ""}`] : []),
     "",
     ...CAUTIONS,
     "",

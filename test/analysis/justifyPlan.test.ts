@@ -40,7 +40,7 @@ describe("justifyPlan", () => {
     expect(m.extraValueNeeded).toBeCloseTo(1, 9);
   });
 
-  it("flags a chosen upgrade whose incremental B/C is below 1 (chosen for KSI, not money)", async () => {
+  it("flags a chosen upgrade whose incremental B/C is below 1 (chosen for K+A crashes avoided, not money)", async () => {
     // One site; the upgrade adds 2 KSI worth 200 for 300 more lifecycle cost: ΔB/ΔC = 200/300 < 1, yet it avoids more KSI.
     const prepared = syntheticPlan([{ id: "A", options: [{ cost: 100, ksi: 5, benefit: 1000 }, { cost: 400, ksi: 7, benefit: 1200 }] }], 500);
     const [check] = upgradeChecks(await planProgramme(prepared));

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { KSI_AVOIDED_LABEL } from "../../src/report/ksiAvoidedLabel.js";
 import { runCaptured } from "./captureIo.js";
 
 const DEMO = "scenarios/demo.yaml";
@@ -45,7 +46,8 @@ describe("averta compare (smoke, demo scenario)", () => {
     const io = await runCaptured(["compare", DEMO, "scenarios/demo-with-rules.yaml"]);
     expect(io.code).toBe(0);
     expect(io.stdout).toContain("What-if: A = scenarios/demo.yaml");
-    expect(io.stdout).toContain("KSI avoided");
+    // The K+A row and column say what is counted.
+    expect(io.stdout).toContain(KSI_AVOIDED_LABEL);
   });
 
   it("needs exactly two budgets with one scenario (exit 2), and reports a bad budget", async () => {

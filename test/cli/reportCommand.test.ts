@@ -84,6 +84,10 @@ describe("averta report shows what plan and uncertainty compute (demo scenario)"
     const gain = Number(/id="summary-gain" data-extra-ksi="([^"]+)"/.exec(html)![1]);
     expect(gain).toBe(plan.justification.rankingComparison.extraKsiAvoidedByOptimal);
     expect(html).toContain(`${plan.justification.rankingComparison.rankingProjects} projects, ${formatMoney(plan.justification.rankingComparison.rankingSpend)} USD spent`);
+    const atSpend = Number(/data-extra-ksi-at-ranking-spend="([^"]+)"/.exec(html)![1]);
+    expect(atSpend).toBe(plan.justification.rankingComparison.atRankingSpend.extraKsiAvoidedByOptimal);
+    const overExtended = Number(/data-extra-ksi-over-extended="([^"]+)"/.exec(html)![1]);
+    expect(overExtended).toBe(plan.justification.rankingComparison.extendedRanking.extraKsiAvoidedByOptimal);
   });
 
   it("selection probabilities equal uncertainty --format json's for the same seed and draws", async () => {

@@ -25,7 +25,7 @@ describe("frontierSvg", () => {
 
   it("is accessible: role img, labelled by a title and a description, with text escaped", () => {
     expect(svg).toMatch(/^<svg [^>]*role="img"[^>]*aria-labelledby="frontier-title frontier-desc"/);
-    expect(svg).toContain('<title id="frontier-title">Budget frontier: KSI crashes avoided against budget, Test &lt;city&gt; &amp; co</title>');
+    expect(svg).toContain('<title id="frontier-title">Budget frontier: K+A crashes avoided against budget, Test &lt;city&gt; &amp; co</title>');
     expect(svg).toMatch(/<desc id="frontier-desc">[^<]+<\/desc>/);
   });
 

@@ -28,7 +28,7 @@ export function registerCheckCommand(program: Command, io: CliIo): void {
         `  sites          ${scenario.sites.length} (${byKind("intersection")} intersections, ${byKind("segment")} segments, ${byKind("corridor")} corridors) in ${new Set(scenario.sites.map((s) => s.district)).size} district(s)`,
         `  treatments     ${scenario.catalogue.treatments.length} in ${loaded.catalogues.length} catalogue(s)`,
         `  alternatives   ${alternatives} (up to ${scenario.maxTreatmentsPerSite} treatments per site)`,
-        `  crashes        ${crashes} in ${scenario.crashWindow.firstYear}-${scenario.crashWindow.lastYear}, of which KSI (K+A) ${ksi} (${formatFixed(ksi / windowYears(scenario), 1)} a year)`,
+        `  crashes        ${crashes} in ${scenario.crashWindow.firstYear}-${scenario.crashWindow.lastYear}, of which KSI crashes (K+A) ${ksi} (${formatFixed(ksi / windowYears(scenario), 1)} a year)`,
         `  budget         ${formatMoney(scenario.budget)} ${scenario.currency}`,
         `  rules          ${scenario.rules.length}`,
         `  warnings       ${loaded.warnings.length}`,

@@ -27,7 +27,7 @@ interface FrontierOptions {
   engine: string;
 }
 
-/** `averta frontier <scenario>`: the optimal list's KSI avoided, spend and B/C at a range of budgets. */
+/** `averta frontier <scenario>`: the optimal list's K+A crashes avoided, spend and B/C at a range of budgets. */
 export function registerFrontierCommand(program: Command, io: CliIo): void {
   program
     .command("frontier")
@@ -38,7 +38,7 @@ export function registerFrontierCommand(program: Command, io: CliIo): void {
     .option("--steps <n>", "number of equal budget steps (levels = steps + 1)", "20")
     .option("-f, --format <format>", "table, json or csv", "table")
     .option("-o, --out <file>", "write to this file instead of standard output")
-    .option("--chart <file.svg>", "also write an SVG chart of KSI avoided against budget")
+    .option("--chart <file.svg>", "also write an SVG chart of K+A crashes avoided against budget")
     .option("--force", "replace --out or --chart if it already exists")
     .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
     .action(async (file: string, options: FrontierOptions) => {

@@ -33,10 +33,10 @@ interface PlanOptions {
 export function registerPlanCommand(program: Command, io: CliIo): void {
   program
     .command("plan")
-    .description("choose the treatments to fund that avoid the most KSI crashes within the budget")
+    .description("choose the treatments to fund that avoid the most K+A (fatal and serious-injury) crashes within the budget")
     .argument("<scenario>", "scenario YAML file")
     .option("-b, --budget <amount>", "budget to use instead of the scenario's (4500000, 4.5M, 750k)")
-    .option("--objective <what>", "ksi (KSI crashes avoided) or benefit (monetised benefit PV)")
+    .option("--objective <what>", "ksi (K+A crashes avoided) or benefit (monetised benefit PV)")
     .option("-f, --format <format>", "table, json or csv", "table")
     .option("-o, --out <file>", "write to this file instead of standard output")
     .option("--force", "replace --out if it already exists")
@@ -52,7 +52,7 @@ export function registerPlanCommand(program: Command, io: CliIo): void {
       for (const warning of warnings) if (warning.code === "eb-fallback") io.stderr(`warning: ${formatProblem(warning)}\n`);
       const result = await planProgramme(preparePlan(scenario, objective), budget ?? scenario.budget, { engine });
       // Without a list there is nothing to justify: the diagnosis says why.
-      const planCase = format === "csv" || !hasList(result) ? undefined : casePlan(result);
+      const planCase = format === "csv" || !hasList(result) ? undefined : await casePlan(result, { engine });
       const content =
         format === "json"
           ? JSON.stringify({ ...planJson(result), justification: planCase ? justificationJson(planCase) : null }, null, 2) + "\n"

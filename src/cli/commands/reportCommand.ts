@@ -66,10 +66,11 @@ export function registerReportCommand(program: Command, io: CliIo): void {
       const frontier = await budgetFrontier(prepared, levels, { engine });
       const plan = frontier.find((level) => level.budget === budget)!.plan;
       const uncertainty = drawOptions.draws === 0 ? undefined : await analyseReportUncertainty(io, prepared, plan, drawOptions, engine);
+      const planCase = await casePlan(plan, { engine });
       const csvFileName = options.csv !== undefined ? basename(options.csv) : `${basename(options.out).replace(/\.html?$/i, "")}.csv`;
       const html = reportHtml({
         plan,
-        planCase: casePlan(plan),
+        planCase,
         frontier,
         ...(uncertainty !== undefined && { uncertainty }),
         csvFileName,

@@ -18,11 +18,11 @@ interface ScreenOptions {
   force?: boolean;
 }
 
-/** `averta screen <scenario>`: rank sites by excess expected KSI and propose the top ones. */
+/** `averta screen <scenario>`: rank sites by excess expected K+A crashes and propose the top ones. */
 export function registerScreenCommand(program: Command, io: CliIo): void {
   program
     .command("screen")
-    .description("rank every site by excess expected KSI crashes (Empirical Bayes) and by observed KSI, and propose the top sites")
+    .description("rank every site by excess expected K+A crashes (Empirical Bayes) and by observed K+A crashes, and propose the top sites")
     .argument("<scenario>", "scenario YAML file (sites need aadt and a performanceFunction for EB)")
     .option("-n, --top <count>", "how many sites to propose (and show in the table)", "10")
     .option("-f, --format <format>", "table, csv or json", "table")

@@ -26,7 +26,7 @@ export interface ReportUncertainty {
 export interface ReportInput {
   /** The optimal list at the chosen budget (one of the frontier's levels). */
   readonly plan: PlanResult;
-  /** The case for that list: justification with entry thresholds, incremental B/C, the B/C ranking comparison (`casePlan(plan)`). */
+  /** The case for that list: justification with entry thresholds, incremental B/C, the B/C ranking comparison, also at equal spend (`await casePlan(plan)`). */
   readonly planCase: PlanCase;
   /** Optimal lists at rising budget levels, for the chart and the slider. */
   readonly frontier: readonly FrontierLevel[];

@@ -58,7 +58,7 @@ ${item("Crash window", `${assumptions.crashWindow.firstYear}–${assumptions.cra
 ${item("Baseline method", escapeHtml((BASELINE_METHODS[assumptions.baseline] ?? assumptions.baseline) + "." + baselineUsed))}
 ${item("SPF calibration", escapeHtml(assumptions.calibration))}
 ${item("Traffic growth", escapeHtml(assumptions.trafficGrowth))}
-${item("K+A crashes (KSI)", escapeHtml(assumptions.ksiDefinition))}
+${item("K+A crashes avoided", escapeHtml(assumptions.ksiDefinition))}
 ${item("Valuing K and A crashes", escapeHtml(assumptions.ksiCosting))}
 ${item("Price year", escapeHtml(`${assumptions.programmePriceYear === null ? "programme price year not stated" : `programme money: ${assumptions.programmePriceYear} prices`}; crash costs: ${assumptions.crashCostEscalation}`))}
 ${item("Combining treatments", escapeHtml(assumptions.cmfCombination))}
@@ -90,7 +90,7 @@ function ruleText(rule: PolicyRule): string {
     case "spend-floor":
       return `Spend in ${scope(rule)} ${rule.kind === "spend-cap" ? "at most" : "at least"} ${rule.share !== undefined ? `${formatFixed(rule.share * 100, 1)}% of total spend` : formatMoney(rule.amount ?? 0)}`;
     case "ksi-share-floor":
-      return `KSI avoided in ${scope(rule)} at least ${formatFixed(rule.share * 100, 1)}% of all KSI avoided`;
+      return `K+A crashes avoided in ${scope(rule)} at least ${formatFixed(rule.share * 100, 1)}% of all K+A crashes avoided`;
     case "max-projects":
       return `At most ${rule.count} projects in ${scope(rule)}`;
   }

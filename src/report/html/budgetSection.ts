@@ -32,13 +32,13 @@ export function budgetSection(input: ReportInput): string {
 <label for="budget-slider">Try another budget:</label>
 <input type="range" id="budget-slider" min="0" max="${Math.max(0, frontier.length - 1)}" step="1" value="${data.chosen}">
 <output id="slider-budget" for="budget-slider"></output>
-<dl class="slider-totals">${total("projects", "Projects")}${total("cost", `Spend (${currency})`)}${total("ksi", "KSI avoided")}${total("ksi-per-year", "KSI a year at first")}${total("benefit", `Benefit PV (${currency})`)}${total("bc", "B/C")}${total("npv", `NPV (${currency})`)}${total("cost-per-ksi", `Cost per KSI (${currency})`)}</dl>
+<dl class="slider-totals">${total("projects", "Projects")}${total("cost", `Spend (${currency})`)}${total("ksi", "K+A crashes avoided")}${total("ksi-per-year", "K+A crashes avoided a year at first")}${total("benefit", `Benefit PV (${currency})`)}${total("bc", "B/C")}${total("npv", `NPV (${currency})`)}${total("cost-per-ksi", `Cost per K+A crash avoided (${currency})`)}</dl>
 <p class="note"><span id="slider-status"></span> <span id="slider-change"></span></p>
-<div class="slider-list"><table class="list compact"><thead><tr><th>Site</th><th>District</th><th>Treatments</th><th class="num">Cost</th><th class="num">KSI avoided</th><th>vs chosen</th></tr></thead><tbody id="slider-funded"></tbody></table></div>
+<div class="slider-list"><table class="list compact"><thead><tr><th>Site</th><th>District</th><th>Treatments</th><th class="num">Cost</th><th class="num">K+A crashes avoided</th><th>vs chosen</th></tr></thead><tbody id="slider-funded"></tbody></table></div>
 </div>
 <table class="list compact levels">
 <caption>Optimal list at each budget level (money in ${currency})</caption>
-<thead><tr><th class="num">Budget</th><th class="num">Projects</th><th class="num">Spend</th><th class="num">KSI avoided</th><th class="num">Cost per KSI</th></tr></thead>
+<thead><tr><th class="num">Budget</th><th class="num">Projects</th><th class="num">Spend</th><th class="num">K+A crashes avoided</th><th class="num">Cost per K+A crash avoided</th></tr></thead>
 <tbody>
 ${levelRows}
 </tbody>

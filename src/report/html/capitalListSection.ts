@@ -22,7 +22,7 @@ export function capitalListSection(input: ReportInput): string {
     const { entry, alternative } = project;
     const upgrade = upgrades.get(entry.site.id);
     const reason = fundedReason(scenario, project, cases.get(entry.site.id)!, plan.funded.length, upgrade);
-    const flag = upgrade?.forKsiNotMoney === true ? ' <span class="tag flag" title="incremental B/C below 1 over the next cheaper alternative at this site">chosen for KSI, not money</span>' : "";
+    const flag = upgrade?.forKsiNotMoney === true ? ' <span class="tag flag" title="incremental B/C below 1 over the next cheaper alternative at this site">chosen for K+A crashes avoided, not money</span>' : "";
     const robustnessCell = uncertainty === undefined ? "" : selectionCell(selections.get(entry.site.id));
     return `<tbody class="project" data-site="${escapeHtml(entry.site.id)}">
 <tr><td><span class="site-id">${escapeHtml(entry.site.id)}</span> ${escapeHtml(entry.site.name)}${entry.required ? ' <span class="tag">must fund</span>' : ""}</td><td class="treatments">${escapeHtml(treatmentNames(scenario, alternative.treatments))}${flag}</td><td>${escapeHtml(entry.site.district)}</td><td class="num">${formatMoney(alternative.cost)}</td><td class="num">${formatFixed(alternative.ksiAvoided, 2)}</td><td class="num">${formatFixed(alternative.bcRatio, 1)}</td><td class="num">${formatMoney(alternative.npv)}</td><td class="num">${formatMoney(alternative.costPerKsi)}</td>${robustnessCell}</tr>
@@ -37,13 +37,13 @@ export function capitalListSection(input: ReportInput): string {
       ? ""
       : ` "Selected in draws" is the share of ${drawCount} uncertainty draws whose optimal list includes the project: <strong>core</strong> at 90% or more, <strong>marginal</strong> at 10% or more (see Robustness).`;
   const flagged = planCase.upgrades.filter((check) => check.forKsiNotMoney).length;
-  const flagNote = flagged === 0 ? "" : ` ${flagged} project${flagged === 1 ? " is an upgrade" : "s are upgrades"} whose extra cost over the next cheaper option at the site returns less than it costs (incremental B/C below 1; Highway Safety Manual, Part B, Chapter 7): marked "chosen for KSI, not money".`;
+  const flagNote = flagged === 0 ? "" : ` ${flagged} project${flagged === 1 ? " is an upgrade" : "s are upgrades"} whose extra cost over the next cheaper option at the site returns less than it costs (incremental B/C below 1; Highway Safety Manual, Part B, Chapter 7): marked "chosen for K+A crashes avoided, not money".`;
   const empty = plan.funded.length === 0 ? `<tbody><tr><td colspan="${columns}">No project is funded at this budget.</td></tr></tbody>` : "";
   return `<section id="capital-list">
 <h2>The capital list</h2>
-<p>${totals.projects} projects, ordered by site. Money in ${currency}; KSI avoided over each project's service life within the horizon; cost per KSI is lifecycle cost PV per KSI crash avoided.${flagNote}${robustnessNote}</p>
+<p>${totals.projects} projects, ordered by site. Money in ${currency}; K+A crashes avoided (KSI crashes: with a fatality or a serious injury; crashes, not people) over each project's service life within the horizon; cost per K+A crash avoided is lifecycle cost PV ÷ K+A crashes avoided.${flagNote}${robustnessNote}</p>
 <table class="list">
-<thead><tr><th>Site</th><th>Treatments</th><th>District</th><th class="num">Cost</th><th class="num">KSI avoided</th><th class="num">B/C</th><th class="num">NPV</th><th class="num">Cost per KSI</th>${robustnessHead}</tr></thead>
+<thead><tr><th>Site</th><th>Treatments</th><th>District</th><th class="num">Cost</th><th class="num">K+A crashes avoided</th><th class="num">B/C</th><th class="num">NPV</th><th class="num">Cost per K+A crash avoided</th>${robustnessHead}</tr></thead>
 ${rows.join("\n")}${empty}
 <tfoot><tr><td colspan="3">Total: ${totals.projects} projects</td><td class="num">${formatMoney(totals.cost)}</td><td class="num">${formatFixed(totals.ksiAvoided, 2)}</td><td class="num">${formatFixed(totals.bcRatio, 1)}</td><td class="num">${formatMoney(totals.npv)}</td><td class="num">${formatMoney(totals.costPerKsi)}</td>${uncertainty === undefined ? "" : "<td></td>"}</tr></tfoot>
 </table>

@@ -4,7 +4,7 @@ import { hasList } from "../hasList.js";
 import { treatmentNames } from "./treatmentNames.js";
 import type { Scenario } from "../../model/types.js";
 
-/** One budget level: its totals (null when no list is possible) and funded projects as [site index, treatments, cost, KSI avoided]. */
+/** One budget level: its totals (null when no list is possible) and funded projects as [site index, treatments, cost, K+A crashes avoided]. */
 export interface SliderLevel {
   readonly budget: number;
   readonly status: string;

@@ -15,7 +15,7 @@ export const NOT_FUNDED_LABELS: Readonly<Record<NotFundedReason, string>> = {
 /**
  * The justification's reason for leaving a site out, in plain words: for the budget (or a B/C
  * below 1) with the entry threshold of its option nearest to entering, how much cheaper it would
- * need to be or how many more KSI it would need to avoid; `entersAtBudget` is the lowest budget
+ * need to be or how many more K+A crashes it would need to avoid; `entersAtBudget` is the lowest budget
  * on the report's chart whose optimal list includes the site, if any.
  */
 export function notFundedExplanation(scenario: Scenario, objective: Objective, site: NotFundedCase, entersAtBudget: number | undefined): string {
@@ -28,7 +28,7 @@ export function notFundedExplanation(scenario: Scenario, objective: Objective, s
     case "bc-below-1":
       return `Its best option returns less than it costs (best B/C ${formatFixed(site.bestBcRatio ?? Number.NaN, 2)}, below 1).${thresholdText(scenario, objective, site)}${chart}`;
     case "budget":
-      return `Left out for the budget: the money avoids more ${objective === "ksi" ? "KSI crashes" : "crash cost"} in the funded projects.${thresholdText(scenario, objective, site)}${chart}`;
+      return `Left out for the budget: the money avoids more ${objective === "ksi" ? "K+A crashes" : "crash cost"} in the funded projects.${thresholdText(scenario, objective, site)}${chart}`;
   }
 }
 
@@ -39,7 +39,7 @@ function thresholdText(scenario: Scenario, objective: Objective, site: NotFunded
   if (threshold.costCut <= 0) {
     return ` Its option ${option} is within its entry threshold but does not fit the money left beside the funded projects: a near miss, an integer effect at the margin rather than a weak project.`;
   }
-  const more = objective === "ksi" ? `${formatFixed(threshold.extraValueNeeded, 2)} more KSI crashes` : `${formatMoney(threshold.extraValueNeeded)} more benefit PV`;
+  const more = objective === "ksi" ? `${formatFixed(threshold.extraValueNeeded, 2)} more K+A crashes` : `${formatMoney(threshold.extraValueNeeded)} more benefit PV`;
   if (!(threshold.costThreshold > 0)) {
     return ` Its option nearest to entering, ${option}, would enter only if it avoided about ${more} at its cost; no price cut alone is enough.`;
   }

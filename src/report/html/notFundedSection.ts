@@ -1,5 +1,6 @@
 import type { NotFundedCase, NotFundedReason } from "../../analysis/justifyPlan.js";
-import { formatFixed, formatMoney } from "../formatNumber.js";
+import { formatMoney } from "../formatNumber.js";
+import { marginalValueWords } from "../marginalValueWords.js";
 import { escapeHtml } from "./escapeHtml.js";
 import { NOT_FUNDED_LABELS, notFundedExplanation } from "./notFundedExplanation.js";
 import type { ReportInput } from "./ReportInput.js";
@@ -25,18 +26,17 @@ export function notFundedSection(input: ReportInput): string {
   const rows = left.map((site) => {
     const threshold = site.threshold;
     const reason = notFundedExplanation(scenario, objective, site, entersAt(site.site));
-    const enters = threshold === null ? "–" : threshold.costCut <= 0 ? "its cost (near miss)" : threshold.costThreshold > 0 ? formatMoney(threshold.costThreshold) : objective === "ksi" ? "needs more KSI" : "needs more benefit";
+    const enters = threshold === null ? "–" : threshold.costCut <= 0 ? "its cost (near miss)" : threshold.costThreshold > 0 ? formatMoney(threshold.costThreshold) : objective === "ksi" ? "needs more K+A crashes avoided" : "needs more benefit";
     return `<tbody class="project" data-site="${escapeHtml(site.site)}" data-reason="${site.reason}">
 <tr><td><span class="site-id">${escapeHtml(site.site)}</span> ${escapeHtml(site.name)}</td><td>${escapeHtml(districts.get(site.site) ?? "")}</td><td>${escapeHtml(NOT_FUNDED_LABELS[site.reason])}</td><td>${threshold ? escapeHtml(treatmentNames(scenario, threshold.treatments)) : "–"}</td><td class="num">${threshold ? formatMoney(threshold.cost) : "–"}</td><td class="num">${enters}</td></tr>
 <tr class="reason"><td colspan="6">${escapeHtml(reason)}</td></tr>
 </tbody>`;
   });
   const lambda = justification.budgetMarginalValue;
-  const unit = objective === "ksi" ? "KSI crashes avoided" : `${escapeHtml(scenario.currency)} of benefit PV`;
   const margin =
     lambda === null
       ? "No entry thresholds are given: the scenario's policy rules price the margin as well as the budget."
-      : `At this budget one more 1,000,000 would buy about ${formatFixed(lambda * 1e6, 2)} ${unit} at the margin (the budget's marginal value λ, from the ${justification.marginalValueSource === "solver" ? "solver" : "LP relaxation"}); the thresholds below follow from it.`;
+      : `At this budget the marginal value of money, λ, is about ${escapeHtml(marginalValueWords(lambda, objective, scenario.currency))} (from the ${justification.marginalValueSource === "solver" ? "solver" : "LP relaxation"}): what one more 1M ${escapeHtml(scenario.currency)} would buy at the margin; the thresholds below follow from it.`;
   return `<section id="not-funded">
 <h2>Not funded and why</h2>
 <p>${left.length} candidate sites are not in the list, nearest to entering first. ${margin} "Option" is the site's option nearest to entering; "Enters at" is the cost at or below which it would enter, by the method below.</p>

@@ -38,6 +38,8 @@ caption { text-align: left; padding-bottom: 4px; }
 td.treatments { width: 30%; }
 #capital-list td:first-child, #not-funded td:first-child { min-width: 11em; }
 table.list th.num { white-space: normal; }
+table.ranking tbody th { text-transform: none; letter-spacing: normal; font-size: inherit; color: inherit; font-weight: normal; vertical-align: top; }
+table.ranking tbody th, table.ranking tbody td { border-bottom: 1px solid var(--rule); }
 .site-id { font-weight: 650; font-variant-numeric: tabular-nums; white-space: nowrap; }
 .tag { font-size: 11px; border: 1px solid var(--ink); padding: 0 4px; border-radius: 3px; white-space: nowrap; }
 .tag.flag { border-color: var(--warn); color: var(--warn); }

@@ -19,7 +19,7 @@ interface MappedSite {
   readonly name: string;
   readonly district: string;
   readonly funded: boolean;
-  /** KSI avoided by the funded alternative, or by the site's best option when not funded. */
+  /** K+A crashes avoided by the funded alternative, or by the site's best option when not funded. */
   readonly ksi: number;
   readonly point: PlanePoint;
 }
@@ -27,7 +27,7 @@ interface MappedSite {
 /**
  * A plain SVG map of the sites: equirectangular projection about the centre of the sites'
  * bounding box, funded sites as filled circles and the rest as hollow diamonds (shape and fill
- * differ, not only colour; Okabe–Ito colours), marker area proportional to KSI avoided,
+ * differ, not only colour; Okabe–Ito colours), marker area proportional to K+A crashes avoided,
  * district names at their sites' centroids, a legend and a scale bar. Sites without a location
  * are counted in a note.
  */
@@ -70,7 +70,7 @@ export function siteMapSvg(plan: PlanResult): string {
     .map((site) => {
       const { x, y } = px(site.point);
       const r = radius(site.ksi);
-      const title = `<title>${escapeHtml(`${site.id} ${site.name} (${site.district}): ${site.funded ? "funded" : "not funded"}, ${formatFixed(site.ksi, 1)} KSI ${site.funded ? "avoided" : "avoidable by its best option"}`)}</title>`;
+      const title = `<title>${escapeHtml(`${site.id} ${site.name} (${site.district}): ${site.funded ? "funded" : "not funded"}, ${formatFixed(site.ksi, 1)} K+A crashes ${site.funded ? "avoided" : "avoidable by its best option"}`)}</title>`;
       return site.funded
         ? `<circle class="site funded" data-site="${escapeHtml(site.id)}" cx="${x}" cy="${y}" r="${r}" fill="${OKABE_ITO.blue}" fill-opacity="0.85" stroke="#fff" stroke-width="1">${title}</circle>`
         : `<path class="site not-funded" data-site="${escapeHtml(site.id)}" d="${diamond(x, y, r)}" fill="none" pointer-events="visible" stroke="${OKABE_ITO.vermillion}" stroke-width="1.8">${title}</path>`;
@@ -104,7 +104,7 @@ ${markers}
 <g class="map-legend">
 <circle cx="${PAD}" cy="${legendTop + 16}" r="7" fill="${OKABE_ITO.blue}" fill-opacity="0.85"/><text class="legend" x="${PAD + 14}" y="${legendTop + 20}">Funded (filled circle)</text>
 <path d="${diamond(PAD, legendTop + 44, 7)}" fill="none" stroke="${OKABE_ITO.vermillion}" stroke-width="1.8"/><text class="legend" x="${PAD + 14}" y="${legendTop + 48}">Not funded (hollow diamond)</text>
-<text class="legend" x="330" y="${legendTop + 14}">Size: KSI crashes avoided</text>
+<text class="legend" x="330" y="${legendTop + 14}">Size: K+A crashes avoided</text>
 ${sizeKeys}
 <line x1="${barX}" x2="${barX + barPixels}" y1="${barY}" y2="${barY}" stroke="#222" stroke-width="2"/><line x1="${barX}" x2="${barX}" y1="${barY - 5}" y2="${barY + 5}" stroke="#222"/><line x1="${barX + barPixels}" x2="${barX + barPixels}" y1="${barY - 5}" y2="${barY + 5}" stroke="#222"/>
 <text class="legend" id="scale-bar-label" x="${round(barX + barPixels / 2)}" y="${barY - 9}" text-anchor="middle" data-km="${barKm}" data-pixels="${barPixels}">${formatScale(barKm)}</text>

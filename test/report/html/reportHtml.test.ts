@@ -20,7 +20,7 @@ beforeAll(async () => {
   const { scenario } = loadScenario("scenarios/demo.yaml");
   const prepared = preparePlan(scenario);
   plan = await planProgramme(prepared);
-  planCase = casePlan(plan);
+  planCase = await casePlan(plan);
   base = { plan, planCase, frontier: [{ budget: plan.budget, plan }], warnings: [{ where: "demo.yaml:3:1", message: "a <b>warning</b>" }], csvFileName: "list.csv" };
   // Few draws keep the test quick; what is checked is that the report shows what the analysis found.
   const draws = await analyseUncertainty(prepared, { draws: 24, seed: 11, threads: 1, sampleBaselines: true, budget: plan.budget, solveOptions: {} });
@@ -45,12 +45,34 @@ describe("reportHtml: the case for the list (justification, upgrades, ranking)",
     expect(html).toContain(`${planCase.ranking.rankingTotals.projects} projects, ${formatMoney(planCase.ranking.rankingTotals.cost)} USD spent`);
   });
 
-  it("gives each funded project its B/C rank and cost per KSI from the justification", () => {
+  it("shows both lists' spend and the comparison at equal spend, two ways", () => {
+    const html = reportHtml(base);
+    const gain = html.slice(html.indexOf('id="summary-gain"'), html.indexOf("</div>", html.indexOf('id="summary-gain"')));
+    const row = (list: string) => new RegExp(`<tr data-list="${list}">(.*?)</tr>`).exec(gain)![1]!;
+    const cells = (list: string) => [...row(list).matchAll(/<td class="num">([^<]*)<\/td>/g)].map((m) => m[1]);
+    const { ranking, atRankingSpend, extendedRanking } = planCase;
+    // Budget, spend, projects, K+A crashes avoided (one decimal), benefit PV: the analysis's own figures.
+    expect(cells("optimal")).toEqual([formatMoney(plan.budget), formatMoney(plan.totals.cost), String(plan.totals.projects), plan.totals.ksiAvoided.toFixed(1), formatMoney(plan.totals.benefitPV)]);
+    expect(cells("ranking").slice(0, 2)).toEqual([formatMoney(plan.budget), formatMoney(ranking.rankingTotals.cost)]);
+    // (a) solved with the budget set to the ranking's spend; (b) the ranking carried on within the full budget.
+    expect(cells("optimal-at-ranking-spend").slice(0, 2)).toEqual([formatMoney(ranking.rankingTotals.cost), formatMoney(atRankingSpend.plan.totals.cost)]);
+    expect(cells("extended-ranking").slice(0, 2)).toEqual([formatMoney(plan.budget), formatMoney(extendedRanking.totals.cost)]);
+    expect(Number(/data-extra-ksi-at-ranking-spend="([^"]+)"/.exec(gain)![1])).toBe(atRankingSpend.extraKsiAvoided);
+    expect(Number(/data-extra-ksi-over-extended="([^"]+)"/.exec(gain)![1])).toBe(extendedRanking.extraKsiAvoided);
+    // On the demo the plain ranking stops far short of the budget, so the equal-spend figures differ from the plain gain.
+    expect(ranking.rankingTotals.cost).toBeLessThan(0.8 * plan.totals.cost);
+    expect(atRankingSpend.extraKsiAvoided!).toBeGreaterThan(0);
+    expect(atRankingSpend.extraKsiAvoided!).toBeLessThan(ranking.extraKsiAvoided);
+    expect(extendedRanking.totals.cost).toBeGreaterThan(ranking.rankingTotals.cost);
+    expect(extendedRanking.totals.cost).toBeLessThanOrEqual(plan.budget);
+  });
+
+  it("gives each funded project its B/C rank and cost per K+A crash avoided from the justification", () => {
     const html = reportHtml(base);
     for (const project of planCase.justification.funded) {
       const block = projectBlock(html, "capital-list", project.site);
       expect(block).toMatch(new RegExp(`${project.bcRank}(st|nd|rd|th) of ${planCase.justification.funded.length} by B/C`));
-      expect(block).toContain(`${formatMoney(project.costPerKsi)} lifecycle cost per KSI avoided`);
+      expect(block).toContain(`${formatMoney(project.costPerKsi)} lifecycle cost per K+A crash avoided`);
     }
     expect(planCase.justification.funded.length).toBe(plan.funded.length);
   });
@@ -65,14 +87,14 @@ describe("reportHtml: the case for the list (justification, upgrades, ranking)",
     }
   });
 
-  it("flags an upgrade chosen for KSI, not money, with its incremental B/C (the demo has none)", async () => {
+  it("flags an upgrade chosen for K+A crashes avoided, not money, with its incremental B/C (the demo has none)", async () => {
     // The upgrade adds 2 KSI worth 200 for 300 more lifecycle cost: ΔB/ΔC = 200/300 < 1 (HSM Part B, Ch. 7), yet it avoids more KSI.
     const flagged = await planProgramme(syntheticPlan([{ id: "A", options: [{ cost: 100, ksi: 5, benefit: 1000 }, { cost: 400, ksi: 7, benefit: 1200 }] }], 500));
-    const flaggedCase = casePlan(flagged);
+    const flaggedCase = await casePlan(flagged);
     expect(flaggedCase.upgrades.map((check) => check.forKsiNotMoney)).toEqual([true]);
     const html = capitalListSection({ plan: flagged, planCase: flaggedCase, frontier: [{ budget: 500, plan: flagged }], warnings: [], csvFileName: "x.csv" });
     expect(html.match(/<span class="tag flag"/g)).toHaveLength(1);
-    expect(html).toContain("Chosen for KSI, not money: the step up from t0 has incremental B/C 0.67, below 1; on money alone the site would get t0.");
+    expect(html).toContain("Chosen for K+A crashes avoided, not money: the step up from t0 has incremental B/C 0.67, below 1; on money alone the site would get t0.");
     expect(html).toContain("1 project is an upgrade whose extra cost");
   });
 

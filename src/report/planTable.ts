@@ -2,6 +2,7 @@ import Table from "cli-table3";
 import { planMethodNotes } from "../analysis/planMethodNotes.js";
 import type { PlanResult } from "../analysis/planProgramme.js";
 import { CAUTIONS } from "./cautions.js";
+import { describeAssumptions, type Assumptions } from "./describeAssumptions.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
 import { hasList } from "./hasList.js";
 import { KSI_AVOIDED_LABEL } from "./ksiAvoidedLabel.js";
@@ -56,10 +57,23 @@ export function planTable(result: PlanResult, sections: readonly string[] = []):
     "",
     "Method notes:",
     ...planMethodNotes(result).notes.map((note) => `- ${note}`),
+    ...methodLines(describeAssumptions(prepared.scenario)).map((line) => `- ${line}`),
     "",
     ...sections.flatMap((section) => [section, ""]),
     "Cautions:",
     ...CAUTIONS.map((caution) => `- ${caution}`),
   ];
   return lines.filter((line, index, all) => !(line === "" && all[index - 1] === "")).join("\n") + "\n";
+}
+
+/** The method choices a reader of the table needs beside the figures (the JSON carries them all under assumptions). */
+function methodLines(assumptions: Assumptions): string[] {
+  return [
+    `Valuing K and A crashes: ${assumptions.ksiCosting}.`,
+    `Crash-cost price year: ${assumptions.crashCostEscalation}.`,
+    `Combining treatments: ${assumptions.cmfCombination}.`,
+    `Service lives: ${assumptions.serviceLives}.`,
+    `Traffic growth: ${assumptions.trafficGrowth}.`,
+    `SPF calibration: ${assumptions.calibration}.`,
+  ];
 }

@@ -5,6 +5,7 @@ import { loadScenario } from "../../io/loadScenario.js";
 import { sumCrashMatrix } from "../../model/crashMatrix.js";
 import { windowYears } from "../../model/siteBaselines.js";
 import { KSI_SEVERITIES } from "../../model/types.js";
+import { describeAssumptions } from "../../report/describeAssumptions.js";
 import { formatFixed, formatMoney } from "../../report/formatNumber.js";
 import type { CliIo } from "../CliIo.js";
 
@@ -30,6 +31,8 @@ export function registerCheckCommand(program: Command, io: CliIo): void {
         `  alternatives   ${alternatives} (up to ${scenario.maxTreatmentsPerSite} treatments per site)`,
         `  crashes        ${crashes} in ${scenario.crashWindow.firstYear}-${scenario.crashWindow.lastYear}, of which KSI crashes (K+A) ${ksi} (${formatFixed(ksi / windowYears(scenario), 1)} a year)`,
         `  budget         ${formatMoney(scenario.budget)} ${scenario.currency}`,
+        `  baselines      ${scenario.baseline}: Empirical Bayes at ${prepared.baselines.filter((b) => b.method === "empirical-bayes").length} site(s), observed counts at ${prepared.baselines.filter((b) => b.method === "observed").length}`,
+        `  K+A costing    ${describeAssumptions(scenario).ksiCosting}`,
         `  rules          ${scenario.rules.length}`,
         `  warnings       ${loaded.warnings.length}`,
       ];

@@ -17,6 +17,7 @@ export function capitalListSection(input: ReportInput): string {
   const columns = uncertainty === undefined ? 8 : 9;
   const cases = new Map(planCase.justification.funded.map((entry) => [entry.site, entry]));
   const upgrades = new Map(planCase.upgrades.map((check) => [check.site, check]));
+  const methodBySite = new Map(plan.prepared.baselines.map((baseline) => [baseline.site, baseline.method]));
   const selections = new Map((uncertainty?.draws.summary.selections ?? []).filter((s) => s.inPlan).map((s) => [s.site, s]));
   const rows = plan.funded.map((project) => {
     const { entry, alternative } = project;
@@ -25,7 +26,7 @@ export function capitalListSection(input: ReportInput): string {
     const flag = upgrade?.forKsiNotMoney === true ? ' <span class="tag flag" title="incremental B/C below 1 over the next cheaper alternative at this site">chosen for K+A crashes avoided, not money</span>' : "";
     const robustnessCell = uncertainty === undefined ? "" : selectionCell(selections.get(entry.site.id));
     return `<tbody class="project" data-site="${escapeHtml(entry.site.id)}">
-<tr><td><span class="site-id">${escapeHtml(entry.site.id)}</span> ${escapeHtml(entry.site.name)}${entry.required ? ' <span class="tag">must fund</span>' : ""}</td><td class="treatments">${escapeHtml(treatmentNames(scenario, alternative.treatments))}${flag}</td><td>${escapeHtml(entry.site.district)}</td><td class="num">${formatMoney(alternative.cost)}</td><td class="num">${formatFixed(alternative.ksiAvoided, 2)}</td><td class="num">${formatFixed(alternative.bcRatio, 1)}</td><td class="num">${formatMoney(alternative.npv)}</td><td class="num">${formatMoney(alternative.costPerKsi)}</td>${robustnessCell}</tr>
+<tr><td><span class="site-id">${escapeHtml(entry.site.id)}</span> ${escapeHtml(entry.site.name)}${entry.required ? ' <span class="tag">must fund</span>' : ""}${baselineTag(methodBySite.get(entry.site.id))}</td><td class="treatments">${escapeHtml(treatmentNames(scenario, alternative.treatments))}${flag}</td><td>${escapeHtml(entry.site.district)}</td><td class="num">${formatMoney(alternative.cost)}</td><td class="num">${formatFixed(alternative.ksiAvoided, 2)}</td><td class="num">${formatFixed(alternative.bcRatio, 1)}</td><td class="num">${formatMoney(alternative.npv)}</td><td class="num">${formatMoney(alternative.costPerKsi)}</td>${robustnessCell}</tr>
 <tr class="reason"><td colspan="${columns}">${escapeHtml(reason)}</td></tr>
 </tbody>`;
   });
@@ -48,6 +49,13 @@ ${rows.join("\n")}${empty}
 <tfoot><tr><td colspan="3">Total: ${totals.projects} projects</td><td class="num">${formatMoney(totals.cost)}</td><td class="num">${formatFixed(totals.ksiAvoided, 2)}</td><td class="num">${formatFixed(totals.bcRatio, 1)}</td><td class="num">${formatMoney(totals.npv)}</td><td class="num">${formatMoney(totals.costPerKsi)}</td>${uncertainty === undefined ? "" : "<td></td>"}</tr></tfoot>
 </table>
 </section>`;
+}
+
+/** Which baseline the project's crashes come from; observed counts are flagged, since they are not corrected for regression to the mean. */
+function baselineTag(method: string | undefined): string {
+  return method === "empirical-bayes"
+    ? ' <span class="tag baseline" title="expected crashes by Empirical Bayes">EB</span>'
+    : ' <span class="tag baseline flag" title="expected crashes from observed counts, not corrected for regression to the mean">observed counts</span>';
 }
 
 function selectionCell(selection: SelectionFrequency | undefined): string {

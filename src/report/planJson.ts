@@ -1,4 +1,5 @@
 import type { PlanResult } from "../analysis/planProgramme.js";
+import { sitesWithoutCandidates } from "../model/sitesWithoutCandidates.js";
 import { CAUTIONS } from "./cautions.js";
 import { describeAssumptions } from "./describeAssumptions.js";
 import { jsonNumber } from "./formatNumber.js";
@@ -33,6 +34,7 @@ export function planJson(result: PlanResult): object {
       costPerKsi: jsonNumber(alternative.costPerKsi),
       required: entry.required,
     })),
+    sitesWithoutCandidates: sitesWithoutCandidates(prepared.scenario.sites),
     bound: solution.bound,
     gap: solution.gap,
     budgetMarginalValue: solution.budgetMarginalValue,

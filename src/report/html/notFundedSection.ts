@@ -1,5 +1,7 @@
 import type { NotFundedCase, NotFundedReason } from "../../analysis/justifyPlan.js";
+import { sitesWithoutCandidates } from "../../model/sitesWithoutCandidates.js";
 import { formatFixed, formatMoney } from "../formatNumber.js";
+import { noCandidatesText } from "../noCandidatesText.js";
 import { escapeHtml } from "./escapeHtml.js";
 import { NOT_FUNDED_LABELS, notFundedExplanation } from "./notFundedExplanation.js";
 import type { ReportInput } from "./ReportInput.js";
@@ -31,6 +33,7 @@ export function notFundedSection(input: ReportInput): string {
 <tr class="reason"><td colspan="6">${escapeHtml(reason)}</td></tr>
 </tbody>`;
   });
+  const noCandidates = noCandidatesText(sitesWithoutCandidates(scenario.sites));
   const lambda = justification.budgetMarginalValue;
   const unit = objective === "ksi" ? "KSI crashes avoided" : `${escapeHtml(scenario.currency)} of benefit PV`;
   const margin =
@@ -39,7 +42,7 @@ export function notFundedSection(input: ReportInput): string {
       : `At this budget one more 1,000,000 would buy about ${formatFixed(lambda * 1e6, 2)} ${unit} at the margin (the budget's marginal value λ, from the ${justification.marginalValueSource === "solver" ? "solver" : "LP relaxation"}); the thresholds below follow from it.`;
   return `<section id="not-funded">
 <h2>Not funded and why</h2>
-<p>${left.length} candidate sites are not in the list, nearest to entering first. ${margin} "Option" is the site's option nearest to entering; "Enters at" is the cost at or below which it would enter, by the method below.</p>
+<p>${left.length} candidate sites are not in the list, nearest to entering first.${noCandidates !== undefined ? ` <span id="no-candidates">${escapeHtml(noCandidates)}.</span>` : ""} ${margin} "Option" is the site's option nearest to entering; "Enters at" is the cost at or below which it would enter, by the method below.</p>
 <table class="list">
 <thead><tr><th>Site</th><th>District</th><th>Why</th><th>Option</th><th class="num">Its cost</th><th class="num">Enters at</th></tr></thead>
 ${rows.join("\n")}

@@ -39,7 +39,7 @@ function lineOf(text: string, needle: string): number {
 }
 
 describe("a scenario that keeps its sites in a separate file", () => {
-  const sites = write("split-sites.yaml", WINDOW + SITES_BLOCK);
+  write("split-sites.yaml", WINDOW + SITES_BLOCK);
   const scenarioFile = write("split.yaml", `${SETTINGS}sites: split-sites.yaml\n`);
 
   it("loads the same scenario as the demo with its sites inline", () => {

@@ -17,10 +17,12 @@ export function scenarioWarnings(
   const warnings: InputProblem[] = [];
   const years = windowYears(scenario);
   if (years < MIN_RECOMMENDED_WINDOW_YEARS) {
+    // The window is written in the scenario, or else in its sites file.
+    const windowSource = (source.data as { crashWindow?: unknown }).crashWindow === undefined ? sitesSource : source;
     warnings.push({
       code: "short-window",
-      file: source.file,
-      ...source.positionOf(["crashWindow"]),
+      file: windowSource.file,
+      ...windowSource.positionOf(["crashWindow"]),
       path: "crashWindow",
       message: `the crash window covers ${years} year(s); common practice is 3 to 5 years`,
       hint: "short windows overstate sites with a chance bad year (regression to the mean)",

@@ -59,7 +59,7 @@ export function initScenarioYaml(draft: ScenarioDraft): string {
     `currency: ${draft.currency}`,
     `budget: ${draft.budget}`,
     ...comment(
-      `The sites and their crash counts are in the sites file, which averta tally can rewrite (tally --out ${draft.sitesFile} --force) without touching this file. ` +
+      "The sites and their crash counts are in the sites file, which averta tally can rewrite (--out naming it, with --force) without touching this file. " +
         `Its crash window${window} is used; add crashWindow here only to pin it.`,
     ),
     `sites: ${q(draft.sitesFile)}`,

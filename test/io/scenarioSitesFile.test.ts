@@ -93,6 +93,13 @@ describe("a scenario that keeps its sites in a separate file", () => {
     expect(neither.message).toMatch(/no crashWindow/);
   });
 
+  it("points a short-window warning at the file that gives the window", () => {
+    write("short-sites.yaml", "crashWindow: { firstYear: 2024, lastYear: 2025 }\n" + SITES_BLOCK);
+    const warning = loadScenario(write("short.yaml", `${SETTINGS}sites: short-sites.yaml\n`)).warnings.find((w) => w.code === "short-window")!;
+    expect(warning.file).toMatch(/short-sites\.yaml$/);
+    expect([warning.line, warning.column]).toEqual([1, 14]);
+  });
+
   it("refuses a scenario that names itself as its sites file", () => {
     const self = problemOf(write("self.yaml", `${SETTINGS}sites: self.yaml\n`));
     expect(self.code).toBe("sites-self");

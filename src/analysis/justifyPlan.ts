@@ -22,7 +22,7 @@ export interface FundedCase {
 /** Why a candidate site is not on the list. */
 export type NotFundedReason =
   | "excluded" // a never-fund rule removed every alternative
-  | "no-alternatives" // no candidate treatment applies
+  | "no-alternatives" // no candidate treatments listed, or none applies
   | "no-effect" // no alternative avoids anything the objective counts
   | "bc-below-1" // its best alternative's B/C is below 1
   | "budget"; // it would pay its way but the money went further elsewhere
@@ -111,7 +111,7 @@ export function justifyPlan(result: PlanResult): PlanJustification {
       notFunded.push(
         entry.excludedBy !== undefined
           ? { ...base, reason: "excluded", explanation: `excluded by a rule (${entry.excludedBy})`, bestBcRatio: null, threshold: null }
-          : { ...base, reason: "no-alternatives", explanation: "no candidate treatment applies to this site", bestBcRatio: null, threshold: null },
+          : { ...base, reason: "no-alternatives", explanation: entry.site.candidates.length === 0 ? "no candidate treatments are listed for this site, so it cannot be funded" : "no candidate treatment applies to this site", bestBcRatio: null, threshold: null },
       );
       continue;
     }

@@ -4,6 +4,7 @@ import type { CliIo } from "./CliIo.js";
 import { registerCheckCommand } from "./commands/checkCommand.js";
 import { registerCompareCommand } from "./commands/compareCommand.js";
 import { registerFrontierCommand } from "./commands/frontierCommand.js";
+import { registerInitCommand } from "./commands/initCommand.js";
 import { registerPlanCommand } from "./commands/planCommand.js";
 import { registerUncertaintyCommand } from "./commands/uncertaintyCommand.js";
 import { registerReportCommand } from "./commands/reportCommand.js";
@@ -30,6 +31,7 @@ export function createProgram(io: CliIo): Command {
   registerFrontierCommand(program, io);
   registerCompareCommand(program, io);
   registerTallyCommand(program, io);
+  registerInitCommand(program, io);
   registerScreenCommand(program, io);
   for (const command of program.commands) command.exitOverride().configureOutput({ writeOut: io.stdout, writeErr: io.stderr });
   return program;

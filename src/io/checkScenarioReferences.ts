@@ -4,6 +4,7 @@ import { formatFieldPath } from "./fieldPath.js";
 import type { InputProblem } from "./InputError.js";
 import type { LoadedCatalogue } from "./loadCatalogue.js";
 import type { RawScenario } from "./loadScenario.js";
+import { candidatesPath } from "./loadScenarioSites.js";
 import { amountHint, parseAmount } from "./parseAmount.js";
 import type { PathSegment, YamlSource } from "./readYamlFile.js";
 
@@ -15,10 +16,14 @@ export function checkScenarioReferences(
   raw: RawScenario,
   source: YamlSource,
   catalogues: readonly LoadedCatalogue[],
+  sitesSource: YamlSource = source,
 ): InputProblem[] {
   const problems: InputProblem[] = [];
-  const problem = (code: string, path: PathSegment[], message: string, hint?: string, key = false) =>
-    problems.push({ code, file: source.file, ...source.positionOf(path, key), path: formatFieldPath(path), message, ...(hint && { hint }) });
+  // A path into sites[…] is in the sites file when the scenario names one.
+  const problem = (code: string, path: PathSegment[], message: string, hint?: string, key = false) => {
+    const at = path[0] === "sites" ? sitesSource : source;
+    problems.push({ code, file: at.file, ...at.positionOf(path, key), path: formatFieldPath(path), message, ...(hint && { hint }) });
+  };
 
   const treatments = new Map<string, Treatment>();
   for (const loaded of catalogues) {
@@ -71,7 +76,7 @@ export function checkScenarioReferences(
     for (const tag of site.tags ?? []) tags.add(tag);
 
     site.candidates.forEach((id, candidateIndex) => {
-      const path: PathSegment[] = ["sites", index, "candidates", candidateIndex];
+      const path: PathSegment[] = [...candidatesPath(raw, index), candidateIndex];
       const treatment = treatments.get(id);
       if (!treatment) {
         const guess = closestName(id, treatments.keys());
@@ -120,7 +125,7 @@ export function checkScenarioReferences(
       const site = raw.sites[at]!;
       (rule.treatments ?? []).forEach((id, treatmentIndex) => {
         if (!site.candidates.includes(id)) {
-          problem("unknown-id", [...path, "treatments", treatmentIndex], `'${id}' is not a candidate at site '${site.id}'`, `candidates there: ${site.candidates.join(", ")}`);
+          problem("unknown-id", [...path, "treatments", treatmentIndex], `'${id}' is not a candidate at site '${site.id}'`, site.candidates.length > 0 ? `candidates there: ${site.candidates.join(", ")}` : "the site has no candidate treatments yet");
         }
       });
       if (listName === "mustFund") {

@@ -1,5 +1,4 @@
-import { existsSync, realpathSync } from "node:fs";
-import { dirname, isAbsolute, join, relative, resolve, sep } from "node:path";
+import { dirname, isAbsolute, relative, resolve } from "node:path";
 import { completeCrashMatrix } from "../model/crashMatrix.js";
 import { estimateCalibrationFactor } from "../model/estimateCalibrationFactor.js";
 import { resolveCrashCosts, type StatedCrashCosts } from "../model/resolveCrashCosts.js";
@@ -20,11 +19,14 @@ import type {
   SiteKind,
   SpfCalibration,
 } from "../model/types.js";
+import { allowedInputPath } from "./allowedInputPath.js";
 import { checkScenarioReferences } from "./checkScenarioReferences.js";
 import { InputError, type InputProblem } from "./InputError.js";
 import { loadCatalogue, type LoadedCatalogue } from "./loadCatalogue.js";
+import { loadScenarioSites } from "./loadScenarioSites.js";
 import { parseAmount } from "./parseAmount.js";
 import { readYamlFile, type YamlSource } from "./readYamlFile.js";
+import { scenarioNotes } from "./scenarioNotes.js";
 import { scenarioWarnings } from "./scenarioWarnings.js";
 import { validateWithSchema } from "./validateWithSchema.js";
 
@@ -41,6 +43,7 @@ interface RawSite {
   aadt?: number;
   performanceFunction?: string;
   crashes: Partial<Record<CrashType, Partial<Record<Severity, number>>>>;
+  /** Treatment ids to consider; empty when the site has none (it is screened, never funded). */
   candidates: string[];
   costOverrides?: Record<string, Amount>;
 }
@@ -48,7 +51,7 @@ interface Selector {
   district?: string;
   tag?: string;
 }
-/** The scenario file as written, after schema validation. */
+/** The scenario after schema validation, with its sites read in (from a sites file, if it names one) and siteCandidates applied. */
 export interface RawScenario {
   name: string;
   catalogues: string[];
@@ -78,6 +81,8 @@ export interface RawScenario {
     maxProjects?: (Selector & { count: number })[];
   };
   sites: RawSite[];
+  /** Candidate lists by site id that replace the sites' own (see loadScenarioSites). */
+  siteCandidates?: Record<string, string[]>;
 }
 
 /** A scenario ready for the model, with the problems worth a warning and the files it read. */
@@ -85,26 +90,36 @@ export interface LoadedScenario {
   readonly scenario: Scenario;
   readonly warnings: readonly InputProblem[];
   readonly source: YamlSource;
+  /** Where the sites are written: `source`, or the sites file the scenario names. */
+  readonly sitesSource: YamlSource;
   readonly catalogues: readonly LoadedCatalogue[];
+  /** Facts worth telling that need no fixing, e.g. sites without candidates. */
+  readonly notes: readonly InputProblem[];
 }
 
 export const DEFAULT_MAX_TREATMENTS_PER_SITE = 3;
 
 /**
- * Reads a scenario and the catalogues it names, validates both against their schemas and
- * against each other, and converts them to the model's types. Throws InputError on bad input.
+ * Reads a scenario, the catalogues it names and the sites file it names (if its `sites:` is a
+ * path), validates them against their schemas and against each other, and converts them to the
+ * model's types. Throws InputError on bad input.
  */
 export function loadScenario(file: string): LoadedScenario {
-  const source = readYamlFile(file);
+  return loadScenarioSource(readYamlFile(file), file);
+}
+
+/** loadScenario for a scenario already parsed; `file` is where it is (or will be) written, for its relative paths. */
+export function loadScenarioSource(source: YamlSource, file: string): LoadedScenario {
   const schemaProblems = validateWithSchema(source, "scenario");
   if (schemaProblems.length > 0) throw new InputError(schemaProblems);
-  const raw = source.data as RawScenario;
+  const located = loadScenarioSites(file, source);
+  const raw: RawScenario = { ...(source.data as RawScenario), crashWindow: located.crashWindow, sites: located.sites };
 
   const seen = new Map<string, number>();
   const catalogues = raw.catalogues.map((path, index) => {
     const at = { file: source.file, ...source.positionOf(["catalogues", index]), path: `catalogues[${index}]` };
     const resolved = resolve(dirname(file), path);
-    const outside = !isAbsolute(path) && !catalogueAllowed(file, resolved);
+    const outside = !isAbsolute(path) && !allowedInputPath(file, resolved);
     if (outside) {
       throw new InputError([{ code: "catalogue-outside", ...at, message: `catalogue '${path}' lies outside the scenario's folder and every 'catalogs' folder above it (${resolved})`, hint: CATALOGUE_PLACES }]);
     }
@@ -136,33 +151,16 @@ export function loadScenario(file: string): LoadedScenario {
     performanceFunctions: catalogues.flatMap((loaded) => loaded.catalogue.performanceFunctions),
   };
 
-  const problems = checkScenarioReferences(raw, source, catalogues);
+  const sitesSource = located.source;
+  const problems = checkScenarioReferences(raw, source, catalogues, sitesSource);
   if (problems.length > 0) throw new InputError(problems);
 
   const scenario = toScenario(raw, catalogue);
-  return { scenario, source, catalogues, warnings: scenarioWarnings(scenario, raw, source, catalogues) };
+  return { scenario, source, sitesSource, catalogues, warnings: scenarioWarnings(scenario, raw, source, catalogues, sitesSource), notes: scenarioNotes(raw, source, sitesSource) };
 }
 
 const CATALOGUE_PLACES =
   "a relative catalogue path must stay inside the scenario's folder or a 'catalogs' folder in it or above it (e.g. ../catalogs/x.yaml); give an absolute path to use a catalogue elsewhere";
-
-/**
- * The catalogue path policy: a relative path may only reach the scenario's own folder tree or a
- * folder named `catalogs` directly inside the scenario's folder or one of its ancestors, judged
- * after symbolic links are followed. A scenario shared with others then cannot quietly read
- * files from elsewhere on their disk; an absolute path is an explicit choice and is accepted.
- */
-function catalogueAllowed(scenarioFile: string, resolved: string): boolean {
-  const real = (path: string) => (existsSync(path) ? realpathSync(path) : path);
-  const inside = (path: string, folder: string) => path === folder || path.startsWith(folder.endsWith(sep) ? folder : folder + sep);
-  const folder = real(dirname(resolve(scenarioFile)));
-  const target = real(resolved);
-  if (inside(target, folder)) return true;
-  for (let ancestor = folder; ; ancestor = dirname(ancestor)) {
-    if (inside(target, real(join(ancestor, "catalogs")))) return true;
-    if (dirname(ancestor) === ancestor) return false;
-  }
-}
 
 function amount(value: Amount): number {
   // The schema and reference checks have already rejected anything parseAmount refuses.

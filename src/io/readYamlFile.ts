@@ -24,7 +24,14 @@ export interface YamlSource {
  * syntax error, duplicate key, alias bomb, nesting too deep) is an InputError with a position.
  */
 export function readYamlFile(file: string, label: string = file): YamlSource {
-  const text = readUtf8(file, label);
+  return parseYamlText(readUtf8(file, label), label);
+}
+
+/**
+ * Parses YAML text already in memory (e.g. a scenario a command is about to write) with the same
+ * checks and positions as readYamlFile; `label` names it in messages.
+ */
+export function parseYamlText(text: string, label: string): YamlSource {
   const lineCounter = new LineCounter();
   const doc = parseDocument(text, { lineCounter, uniqueKeys: true, prettyErrors: false, strict: true });
   const problems: InputProblem[] = doc.errors.map((error) => {

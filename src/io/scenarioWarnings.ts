@@ -13,14 +13,17 @@ export function scenarioWarnings(
   raw: RawScenario,
   source: YamlSource,
   catalogues: readonly LoadedCatalogue[],
+  sitesSource: YamlSource = source,
 ): InputProblem[] {
   const warnings: InputProblem[] = [];
   const years = windowYears(scenario);
   if (years < MIN_RECOMMENDED_WINDOW_YEARS) {
+    // The window is written in the scenario, or else in its sites file.
+    const windowSource = (source.data as { crashWindow?: unknown }).crashWindow === undefined ? sitesSource : source;
     warnings.push({
       code: "short-window",
-      file: source.file,
-      ...source.positionOf(["crashWindow"]),
+      file: windowSource.file,
+      ...windowSource.positionOf(["crashWindow"]),
       path: "crashWindow",
       message: `the crash window covers ${years} year(s); common practice is 3 to 5 years`,
       hint: "short windows overstate sites with a chance bad year (regression to the mean)",
@@ -43,7 +46,7 @@ export function scenarioWarnings(
   }
   raw.sites.forEach((site, index) => {
     if (sumCrashMatrix(scenario.sites[index]!.crashes) === 0) {
-      warnings.push({ code: "no-crashes", file: source.file, ...source.positionOf(["sites", index, "crashes"]), path: `sites[${index}].crashes`, message: `site '${site.id}' has no recorded crashes, so no treatment there can avoid any`, hint: "check the crash assignment, or use an Empirical Bayes baseline" });
+      warnings.push({ code: "no-crashes", file: sitesSource.file, ...sitesSource.positionOf(["sites", index, "crashes"]), path: `sites[${index}].crashes`, message: `site '${site.id}' has no recorded crashes, so no treatment there can avoid any`, hint: "check the crash assignment, or use an Empirical Bayes baseline" });
     }
   });
   if (scenario.baseline === "empirical-bayes") {
@@ -51,7 +54,7 @@ export function scenarioWarnings(
     scenario.sites.forEach((site, index) => {
       const gap = empiricalBayesGap(site, site.performanceFunction === undefined ? undefined : performanceFunctions.get(site.performanceFunction));
       if (gap !== undefined) {
-        warnings.push({ code: "eb-fallback", file: source.file, ...source.positionOf(["sites", index]), path: `sites[${index}]`, message: `site '${site.id}' will use its observed counts, not Empirical Bayes: ${gap}`, hint: "give the site aadt and a performanceFunction that applies to its kind (and lengthKm for a segment)" });
+        warnings.push({ code: "eb-fallback", file: sitesSource.file, ...sitesSource.positionOf(["sites", index]), path: `sites[${index}]`, message: `site '${site.id}' will use its observed counts, not Empirical Bayes: ${gap}`, hint: "give the site aadt and a performanceFunction that applies to its kind (and lengthKm for a segment)" });
       }
     });
   }

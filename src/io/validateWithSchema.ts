@@ -7,15 +7,21 @@ import type { InputProblem } from "./InputError.js";
 import { packageRoot } from "./packageRoot.js";
 import type { YamlSource } from "./readYamlFile.js";
 
-export type SchemaName = "scenario" | "catalogue";
+export type SchemaName = "scenario" | "catalogue" | "sites";
+const SCHEMA_NAMES: readonly SchemaName[] = ["scenario", "catalogue", "sites"];
 
 const compiled = new Map<SchemaName, ValidateFunction>();
+let ajv: Ajv | undefined;
 
 function validatorFor(name: SchemaName): ValidateFunction {
   let validate = compiled.get(name);
   if (!validate) {
-    const schema = JSON.parse(readFileSync(join(packageRoot(), "schema", `${name}.schema.json`), "utf8"));
-    validate = new Ajv({ allErrors: true, strict: false, verbose: true }).compile(schema);
+    // One instance holds every schema, so the sites schema can refer to the scenario's site definition.
+    if (!ajv) {
+      ajv = new Ajv({ allErrors: true, strict: false, verbose: true });
+      for (const each of SCHEMA_NAMES) ajv.addSchema(JSON.parse(readFileSync(join(packageRoot(), "schema", `${each}.schema.json`), "utf8")), each);
+    }
+    validate = ajv.getSchema(name)!;
     compiled.set(name, validate);
   }
   return validate;
@@ -136,6 +142,7 @@ function article(type: string): string {
     array: "a list",
     boolean: "true or false",
     "number,string": "a number or an amount like 4.5M",
+    "array,string": "a list of sites, or the name of a sites file",
   };
   return names[type] ?? type;
 }

@@ -1,5 +1,6 @@
 import { planMethodNotes } from "../analysis/planMethodNotes.js";
 import type { PlanResult } from "../analysis/planProgramme.js";
+import { sitesWithoutCandidates } from "../model/sitesWithoutCandidates.js";
 import { CAUTIONS } from "./cautions.js";
 import { describeAssumptions } from "./describeAssumptions.js";
 import { jsonNumber } from "./formatNumber.js";
@@ -41,6 +42,7 @@ export function planJson(result: PlanResult): object {
       baseline: methodBySite.get(entry.site.id),
       sharedCrashCells: alternative.sharedCells,
     })),
+    sitesWithoutCandidates: sitesWithoutCandidates(prepared.scenario.sites),
     bound: solution.bound,
     gap: solution.gap,
     budgetMarginalValue: solution.budgetMarginalValue,

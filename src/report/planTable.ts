@@ -1,17 +1,20 @@
 import Table from "cli-table3";
 import { planMethodNotes } from "../analysis/planMethodNotes.js";
 import type { PlanResult } from "../analysis/planProgramme.js";
+import { sitesWithoutCandidates } from "../model/sitesWithoutCandidates.js";
 import { CAUTIONS } from "./cautions.js";
 import { describeAssumptions, type Assumptions } from "./describeAssumptions.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
 import { hasList } from "./hasList.js";
 import { KSI_AVOIDED_LABEL } from "./ksiAvoidedLabel.js";
+import { noCandidatesText } from "./noCandidatesText.js";
 
 /** The funded list as a terminal table, with totals against the budget, any extra sections (before the cautions) and the cautions. */
 export function planTable(result: PlanResult, sections: readonly string[] = []): string {
   const { prepared, solution, totals } = result;
   const currency = prepared.scenario.currency;
   const methodBySite = new Map(prepared.baselines.map((baseline) => [baseline.site, baseline.method === "empirical-bayes" ? "EB" : "observed"]));
+  const noCandidates = noCandidatesText(sitesWithoutCandidates(prepared.scenario.sites));
   const table = new Table({
     head: ["Site", "Name", "District", "Baseline", "Treatments", `Cost (${currency})`, KSI_AVOIDED_LABEL, "B/C", `NPV (${currency})`, `Cost per K+A crash avoided (${currency})`],
     colAligns: ["left", "left", "left", "left", "left", "right", "right", "right", "right", "right"],
@@ -48,6 +51,7 @@ export function planTable(result: PlanResult, sections: readonly string[] = []):
     `Budget ${formatMoney(result.budget)} ${currency}; spent ${formatMoney(totals.cost)} (${formatFixed(result.budget > 0 ? (100 * totals.cost) / result.budget : 0, 1)}%); left ${formatMoney(result.budget - totals.cost)}`,
     `K+A crashes avoided ${formatFixed(totals.ksiAvoided, 2)} over the analysis period (${formatFixed(totals.ksiAvoidedPerYear, 2)} a year at first); benefit PV ${formatMoney(totals.benefitPV)}; lifecycle cost PV ${formatMoney(totals.lifecycleCostPV)}`,
     ...(solution.diagnosis ? [`Why: ${solution.diagnosis}`] : []),
+    ...(noCandidates !== undefined ? [`${noCandidates}.`] : []),
     "",
     hasList(result) ? table.toString() : "",
     result.funded.some((project) => project.entry.required) ? "* required by a must-fund rule" : "",

@@ -1,4 +1,5 @@
 import type { NetworkScreening } from "../model/screenSites.js";
+import { sitesWithoutCandidates } from "../model/sitesWithoutCandidates.js";
 import { CAUTIONS } from "./cautions.js";
 import { jsonNumber } from "./formatNumber.js";
 
@@ -9,6 +10,7 @@ export function screenJson(screening: NetworkScreening, scenarioName: string): u
     scenario: scenarioName,
     measure: "excess expected K+A crashes per year (KSI crashes: Empirical Bayes expected minus SPF predicted; crashes of severity K or A, not people)",
     proposed: screening.proposed,
+    sitesWithoutCandidates: sitesWithoutCandidates(screening.sites.map((entry) => entry.site)),
     sites: screening.sites.map((e) => ({
       site: e.site.id,
       name: e.site.name,

@@ -5,7 +5,8 @@ import { CRASH_TYPES, SEVERITIES, type Site } from "../model/types.js";
  * The `crashWindow:` and `sites:` blocks of a scenario, as YAML to paste into (or merge with) a
  * scenario file. Text values are written as JSON strings (valid YAML) so no name can break the
  * file; crash cells that are zero are left out. A site with no candidates gets `candidates: []`
- * and a comment: the scenario schema needs at least one, chosen by the engineer.
+ * and a comment: it is screened and counted but cannot be funded until an engineer lists some
+ * (here, or under the scenario's siteCandidates, which `averta init` fills with suggestions).
  */
 export function sitesYaml(sites: readonly Site[], window: CrashWindow, provenance: string): string {
   const q = (text: string) => JSON.stringify(text);
@@ -28,7 +29,7 @@ export function sitesYaml(sites: readonly Site[], window: CrashWindow, provenanc
       return cells.length > 0 ? `      ${type}: { ${cells.join(", ")} }` : undefined;
     }).filter((row): row is string => row !== undefined);
     lines.push(rows.length > 0 ? "    crashes:" : "    crashes: {}", ...rows);
-    lines.push(site.candidates.length > 0 ? `    candidates: [${site.candidates.map(q).join(", ")}]` : "    candidates: []  # fill in: treatment ids from your catalogue (at least one)");
+    lines.push(site.candidates.length > 0 ? `    candidates: [${site.candidates.map(q).join(", ")}]` : "    candidates: []  # none yet: screened, not fundable; list treatment ids here or under siteCandidates in the scenario");
   }
   return lines.join("\n") + "\n";
 }

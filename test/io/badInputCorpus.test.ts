@@ -33,6 +33,8 @@ interface Case {
   readonly path?: string;
   /** True when the problem is in the catalogue the scenario names, not in the scenario. */
   readonly inCatalogue?: boolean;
+  /** True when the problem is in the sites file (`sites-file-x` scenarios name sites/x.yaml). */
+  readonly inSitesFile?: boolean;
 }
 
 // Lines and columns were read off each fixture by hand (1-based; a header comment is line 1).
@@ -96,7 +98,15 @@ const CASES: readonly Case[] = [
   // sites
   { name: "sites-empty", code: "schema", line: 11, column: 8, path: "sites" },
   { name: "sites-null", code: "schema", line: 11, column: 7, path: "sites" },
-  // catalogue paths (see the policy in loadScenario.ts)
+  // a sites file the scenario names (sites: <file>), and siteCandidates
+  { name: "sites-file-missing", code: "missing-file", line: 10, column: 8, path: "sites" },
+  { name: "sites-file-escapes", code: "sites-outside", line: 10, column: 8, path: "sites" },
+  { name: "sites-file-window-mismatch", code: "window-mismatch", line: 6, column: 14, path: "crashWindow" },
+  { name: "sites-file-kind-typo", code: "schema", line: 13, column: 11, path: "sites[1].kind", inSitesFile: true },
+  { name: "sites-file-unknown-treatment", code: "unknown-id", line: 18, column: 18, path: "sites[1].candidates[0]", inSitesFile: true },
+  { name: "site-candidates-unknown-site", code: "unknown-id", line: 13, column: 3, path: "siteCandidates.I-10" },
+  { name: "site-candidates-unknown-treatment", code: "unknown-id", line: 12, column: 28, path: "siteCandidates.I-01[1]" },
+  // catalogue paths (see the policy in allowedInputPath.ts)
   { name: "catalogue-missing", code: "missing-file", line: 3, column: 14, path: "catalogues[0]" },
   { name: "catalogue-escapes", code: "catalogue-outside", line: 3, column: 14, path: "catalogues[0]" },
   { name: "catalogue-escapes-far", code: "catalogue-outside", line: 3, column: 14, path: "catalogues[0]" },
@@ -122,6 +132,7 @@ const CASES: readonly Case[] = [
 
 /** The file a case's first problem must name. */
 function fileOf(c: Case): string {
+  if (c.inSitesFile) return `${FOLDER}/sites/${c.name.replace(/^sites-file-/, "")}.yaml`;
   return c.inCatalogue ? `${FOLDER}/catalogues/${c.name.replace(/^catalogue-/, "")}.yaml` : `${FOLDER}/${c.name}.yaml`;
 }
 

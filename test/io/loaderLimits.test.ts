@@ -56,7 +56,7 @@ describe("size and depth limits", () => {
   });
 });
 
-// The rule (loadScenario.ts): a relative catalogue path must stay in the scenario's folder tree or
+// The rule (allowedInputPath.ts): a relative catalogue path must stay in the scenario's folder tree or
 // in a `catalogs` folder inside the scenario's folder or any folder above it; absolute paths are
 // accepted; symbolic links are followed before judging.
 describe("catalogue path policy", () => {

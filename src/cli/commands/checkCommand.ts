@@ -4,6 +4,7 @@ import { formatProblem } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
 import { sumCrashMatrix } from "../../model/crashMatrix.js";
 import { windowYears } from "../../model/siteBaselines.js";
+import { sitesWithoutCandidates } from "../../model/sitesWithoutCandidates.js";
 import { KSI_SEVERITIES } from "../../model/types.js";
 import { describeAssumptions } from "../../report/describeAssumptions.js";
 import { formatFixed, formatMoney } from "../../report/formatNumber.js";
@@ -23,12 +24,15 @@ export function registerCheckCommand(program: Command, io: CliIo): void {
       const crashes = scenario.sites.reduce((total, site) => total + sumCrashMatrix(site.crashes), 0);
       const ksi = scenario.sites.reduce((total, site) => total + sumCrashMatrix(site.crashes, KSI_SEVERITIES), 0);
       const byKind = (kind: string) => scenario.sites.filter((site) => site.kind === kind).length;
+      const withoutCandidates = sitesWithoutCandidates(scenario.sites);
       const lines = [
         `${file}: valid`,
         `  scenario       ${scenario.name}`,
+        ...(loaded.sitesSource !== loaded.source ? [`  sites file     ${loaded.sitesSource.file}`] : []),
         `  sites          ${scenario.sites.length} (${byKind("intersection")} intersections, ${byKind("segment")} segments, ${byKind("corridor")} corridors) in ${new Set(scenario.sites.map((s) => s.district)).size} district(s)`,
         `  treatments     ${scenario.catalogue.treatments.length} in ${loaded.catalogues.length} catalogue(s)`,
         `  alternatives   ${alternatives} (up to ${scenario.maxTreatmentsPerSite} treatments per site)`,
+        ...(withoutCandidates.length > 0 ? [`  no candidates  ${withoutCandidates.length} site(s): screened and counted, but they cannot be funded until treatments are listed`] : []),
         `  crashes        ${crashes} in ${scenario.crashWindow.firstYear}-${scenario.crashWindow.lastYear}, of which KSI crashes (K+A) ${ksi} (${formatFixed(ksi / windowYears(scenario), 1)} a year)`,
         `  budget         ${formatMoney(scenario.budget)} ${scenario.currency}`,
         `  baselines      ${scenario.baseline}: Empirical Bayes at ${prepared.baselines.filter((b) => b.method === "empirical-bayes").length} site(s), observed counts at ${prepared.baselines.filter((b) => b.method === "observed").length}`,
@@ -37,18 +41,24 @@ export function registerCheckCommand(program: Command, io: CliIo): void {
         `  warnings       ${loaded.warnings.length}`,
       ];
       io.stdout(lines.join("\n") + "\n");
-      if (loaded.warnings.length > 0) io.stderr(summariseWarnings(loaded.warnings.map((w) => ({ code: w.code, text: formatProblem(w) }))));
+      // Notes first: they need no fixing, so the warnings stay the last thing on screen.
+      if (loaded.notes.length > 0) io.stderr(summariseProblems("note", loaded.notes.map((n) => ({ code: n.code, text: formatProblem(n) })), NOTES_LISTED));
+      if (loaded.warnings.length > 0) io.stderr(summariseProblems("warning", loaded.warnings.map((w) => ({ code: w.code, text: formatProblem(w) })), WARNINGS_LISTED));
     });
 }
 
-/** Prints every warning, except that long runs of one kind are cut to a few examples. */
-function summariseWarnings(warnings: readonly { code: string; text: string }[]): string {
+/** Warnings and notes listed of each kind before the rest are counted. */
+const WARNINGS_LISTED = 5;
+const NOTES_LISTED = 10;
+
+/** Prints every warning (or note), except that long runs of one kind are cut to `listed` examples. */
+function summariseProblems(label: string, warnings: readonly { code: string; text: string }[], listed: number): string {
   const byCode = new Map<string, string[]>();
   for (const warning of warnings) byCode.set(warning.code, [...(byCode.get(warning.code) ?? []), warning.text]);
   const lines: string[] = [];
   for (const [, texts] of byCode) {
-    for (const text of texts.slice(0, 5)) lines.push(`warning: ${text}`);
-    if (texts.length > 5) lines.push(`warning: … and ${texts.length - 5} more like these`);
+    for (const text of texts.slice(0, listed)) lines.push(`${label}: ${text}`);
+    if (texts.length > listed) lines.push(`${label}: … and ${texts.length - listed} more like these`);
   }
   return lines.join("\n") + "\n";
 }

@@ -1,6 +1,8 @@
 import type { NotFundedCase, NotFundedReason } from "../../analysis/justifyPlan.js";
+import { sitesWithoutCandidates } from "../../model/sitesWithoutCandidates.js";
 import { formatMoney } from "../formatNumber.js";
 import { marginalValueWords } from "../marginalValueWords.js";
+import { noCandidatesText } from "../noCandidatesText.js";
 import { escapeHtml } from "./escapeHtml.js";
 import { NOT_FUNDED_LABELS, notFundedExplanation } from "./notFundedExplanation.js";
 import type { ReportInput } from "./ReportInput.js";
@@ -32,6 +34,7 @@ export function notFundedSection(input: ReportInput): string {
 <tr class="reason"><td colspan="6">${escapeHtml(reason)}</td></tr>
 </tbody>`;
   });
+  const noCandidates = noCandidatesText(sitesWithoutCandidates(scenario.sites));
   const lambda = justification.budgetMarginalValue;
   const margin =
     lambda === null
@@ -39,7 +42,7 @@ export function notFundedSection(input: ReportInput): string {
       : `At this budget the marginal value of money, λ, is about ${escapeHtml(marginalValueWords(lambda, objective, scenario.currency))} (from the ${justification.marginalValueSource === "solver" ? "solver" : "LP relaxation"}): what one more 1M ${escapeHtml(scenario.currency)} would buy at the margin; the thresholds below follow from it.`;
   return `<section id="not-funded">
 <h2>Not funded and why</h2>
-<p>${left.length} candidate sites are not in the list, nearest to entering first. ${margin} "Option" is the site's option nearest to entering; "Enters at" is the cost at or below which it would enter, by the method below.</p>
+<p>${left.length} candidate sites are not in the list, nearest to entering first.${noCandidates !== undefined ? ` <span id="no-candidates">${escapeHtml(noCandidates)}.</span>` : ""} ${margin} "Option" is the site's option nearest to entering; "Enters at" is the cost at or below which it would enter, by the method below.</p>
 <table class="list">
 <thead><tr><th>Site</th><th>District</th><th>Why</th><th>Option</th><th class="num">Its cost</th><th class="num">Enters at</th></tr></thead>
 ${rows.join("\n")}

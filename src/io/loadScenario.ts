@@ -11,6 +11,7 @@ import type {
   Severity,
   Site,
   SiteKind,
+  UncertaintySettings,
 } from "../model/types.js";
 import { checkScenarioReferences } from "./checkScenarioReferences.js";
 import { InputError, type InputProblem } from "./InputError.js";
@@ -54,6 +55,7 @@ export interface RawScenario {
   objective?: Objective;
   baseline?: BaselineMethod;
   maxTreatmentsPerSite?: number;
+  uncertainty?: UncertaintySettings;
   rules?: {
     mustFund?: { site: string; treatments?: string[] }[];
     neverFund?: { site: string; treatments?: string[] }[];
@@ -176,6 +178,7 @@ function toScenario(raw: RawScenario, catalogue: Catalogue): Scenario {
     catalogue,
     sites: raw.sites.map(toSite),
     rules: toRules(raw.rules ?? {}),
+    ...(raw.uncertainty !== undefined && { uncertainty: raw.uncertainty }),
   };
 }
 

@@ -127,6 +127,12 @@ export interface Economics {
 }
 
 export type Objective = "ksi" | "benefit";
+
+/** How the uncertainty draws treat CMFs; every field optional, its default stated where it is read. */
+export interface UncertaintySettings {
+  /** Coefficient of variation given to a CMF that publishes no standard error (SE = cv × CMF), or "off" to hold such CMFs exact. */
+  readonly assumedCmfCv?: number | "off";
+}
 export type BaselineMethod = "observed" | "empirical-bayes";
 
 /**
@@ -158,6 +164,7 @@ export interface Scenario {
   readonly catalogue: Catalogue;
   readonly sites: readonly Site[];
   readonly rules: readonly PolicyRule[];
+  readonly uncertainty?: UncertaintySettings;
 }
 
 /** One allowed combination of treatments at one site, with its effects and economics. */

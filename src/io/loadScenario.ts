@@ -18,6 +18,7 @@ import type {
   Site,
   SiteKind,
   SpfCalibration,
+  UncertaintySettings,
 } from "../model/types.js";
 import { allowedInputPath } from "./allowedInputPath.js";
 import { checkScenarioReferences } from "./checkScenarioReferences.js";
@@ -72,6 +73,7 @@ export interface RawScenario {
   calibration?: Record<string, number | "estimate">;
   cmfCombination?: { rule: CmfCombinationRule; floor?: number };
   maxTreatmentsPerSite?: number;
+  uncertainty?: UncertaintySettings;
   rules?: {
     mustFund?: { site: string; treatments?: string[] }[];
     neverFund?: { site: string; treatments?: string[] }[];
@@ -207,6 +209,7 @@ function toScenario(raw: RawScenario, uncalibrated: Catalogue): Scenario {
     sites,
     rules: toRules(raw.rules ?? {}),
     calibrations,
+    ...(raw.uncertainty !== undefined && { uncertainty: raw.uncertainty }),
   };
 }
 

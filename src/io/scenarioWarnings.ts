@@ -1,6 +1,7 @@
 import { sumCrashMatrix } from "../model/crashMatrix.js";
 import { MIN_CALIBRATION_CRASHES, MIN_CALIBRATION_SITES } from "../model/estimateCalibrationFactor.js";
 import { empiricalBayesGap, MIN_RECOMMENDED_WINDOW_YEARS, windowYears } from "../model/siteBaselines.js";
+import { assumedCmfCv } from "../model/sampleTreatmentCmfs.js";
 import type { Scenario } from "../model/types.js";
 import type { InputProblem } from "./InputError.js";
 import type { LoadedCatalogue } from "./loadCatalogue.js";
@@ -39,7 +40,7 @@ export function scenarioWarnings(
           warnings.push({ code: "cmf-above-one", ...at, message: `'${treatment.id}' has CMF ${effect.cmf} > 1: it is expected to increase these crashes`, hint: "intended for a trade-off treatment; otherwise check the value" });
         }
         if (effect.standardError === undefined) {
-          warnings.push({ code: "missing-standard-error", ...at, message: `'${treatment.id}' has no standard error for its CMF ${effect.cmf}`, hint: "uncertainty analysis will treat this CMF as exact" });
+          warnings.push({ code: "missing-standard-error", ...at, message: `'${treatment.id}' has no standard error for its CMF ${effect.cmf}`, hint: uncertaintyHint(scenario) });
         }
       });
     });
@@ -133,4 +134,12 @@ function calibrationWarnings(scenario: Scenario, source: YamlSource): InputProbl
       },
     ];
   });
+}
+
+// What the uncertainty draws will do with a CMF that has no standard error.
+function uncertaintyHint(scenario: Scenario): string {
+  const cv = assumedCmfCv(scenario);
+  return cv === "off" || cv === 0
+    ? "uncertainty analysis will hold this CMF exact (uncertainty.assumedCmfCv: off); give its published standard error if there is one"
+    : `uncertainty analysis will draw it with an assumed standard error of ${cv} × CMF (uncertainty.assumedCmfCv); give its published standard error if there is one`;
 }

@@ -183,6 +183,12 @@ export interface Economics {
 }
 
 export type Objective = "ksi" | "benefit";
+
+/** How the uncertainty draws treat CMFs; every field optional, its default stated where it is read. */
+export interface UncertaintySettings {
+  /** Coefficient of variation given to a CMF that publishes no standard error (SE = cv × CMF), or "off" to hold such CMFs exact. */
+  readonly assumedCmfCv?: number | "off";
+}
 /** How a site's expected crashes are estimated; `auto` is Empirical Bayes where the site allows it, observed otherwise. */
 export type BaselineMethod = "auto" | "observed" | "empirical-bayes";
 /** The method actually used at one site. */
@@ -230,6 +236,7 @@ export interface Scenario {
   readonly rules: readonly PolicyRule[];
   /** Local calibration of SPFs the scenario asked for (the catalogue's SPFs carry the factors). */
   readonly calibrations?: readonly SpfCalibration[];
+  readonly uncertainty?: UncertaintySettings;
 }
 
 /** One allowed combination of treatments at one site, with its effects and economics. */

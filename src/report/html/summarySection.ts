@@ -1,8 +1,9 @@
 import { formatFixed, formatMoney } from "../formatNumber.js";
 import { escapeHtml } from "./escapeHtml.js";
 import type { ReportInput } from "./ReportInput.js";
+import { shakyProjectsNote } from "./shakyProjectsNote.js";
 
-/** The key figures a finance reader needs first: budget, spend, KSI avoided, PVs, B/C, NPV. */
+/** The key figures a finance reader needs first: budget, spend, KSI avoided, PVs, B/C, NPV; and shaky projects when draws were run. */
 export function summarySection(input: ReportInput): string {
   const { plan } = input;
   const { totals, solution } = plan;
@@ -31,6 +32,7 @@ ${figure("npv", "Net present value", `${formatMoney(totals.npv)} <span class="un
 ${figure("cost-per-ksi", "Cost per KSI avoided", `${formatMoney(totals.costPerKsi)} <span class="unit">${currency}</span>`, "lifecycle cost PV ÷ KSI avoided")}
 </div>
 ${rankingGain(input)}
+${shakyProjectsNote(input)}
 </section>`;
 }
 

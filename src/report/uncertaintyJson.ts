@@ -1,15 +1,23 @@
 import type { UncertaintyResult } from "../analysis/uncertainty/analyseUncertainty.js";
 import type { SensitivityCase, SensitivityResult } from "../analysis/uncertainty/oneAtATimeSensitivity.js";
+import { REPLACEMENT_RULE, SHAKY_PROBABILITY } from "../analysis/uncertainty/shakyProjects.js";
 import type { Spread } from "../analysis/uncertainty/summariseDraws.js";
 import { CORE_PROBABILITY, MARGINAL_PROBABILITY } from "../analysis/uncertainty/summariseDraws.js";
 import { BASELINE_SAMPLING_RULE } from "../model/sampleSiteBaseline.js";
+import { cmfSamplingRule } from "../model/sampleTreatmentCmfs.js";
+import { baselinesDrawnText } from "./baselinesDrawnText.js";
 import { CAUTIONS } from "./cautions.js";
 import { describeAssumptions } from "./describeAssumptions.js";
+import { effectsUncertainText } from "./effectsUncertainText.js";
 import { jsonNumber } from "./formatNumber.js";
 
-/** How CMFs are drawn; stated in every uncertainty output. */
-export const CMF_SAMPLING_RULE =
-  "each CMF with a standard error is drawn once per draw from a lognormal whose mean is the published CMF and whose standard deviation is its standard error (sigma² = ln(1 + (se/cmf)²), mu = ln(cmf) − sigma²/2), shared by every site; CMFs without a standard error are held at their value";
+/** What the uncertainty outputs' quantities mean; KSI here counts K+A crashes, not people. */
+export const UNCERTAINTY_DEFINITIONS = {
+  ksiAvoided:
+    "K+A crashes avoided: crashes of KABCO severity K (fatal) or A (suspected serious injury) avoided over each project's service life within the horizon; KSI in field names means these K+A crashes, not people",
+  probability: "a share of the draws (probabilityBcAboveOne over all draws, selection probabilities over the solved draws), each with the effectsUncertain basis beside it",
+  regret: "the best list's objective minus the chosen list's, per solved draw (K+A crashes avoided, or benefit PV, as the objective)",
+} as const;
 
 function spread(value: Spread): object {
   return { mean: jsonNumber(value.mean), p5: jsonNumber(value.p5), p50: jsonNumber(value.p50), p95: jsonNumber(value.p95) };
@@ -30,13 +38,17 @@ function sensitivityCase(value: SensitivityCase): object {
 
 /**
  * The stable JSON contract of `uncertainty --format json`: the chosen list, the spread of what it
- * achieves over the draws, selection probabilities (core, marginal), regret and the one-at-a-time
- * sensitivity. Nothing in it depends on the number of threads, so the same seed gives the same bytes.
+ * achieves over the draws, selection probabilities (core, marginal), shaky funded projects with
+ * their replacements, regret and the one-at-a-time sensitivity; every probability sits beside the
+ * "N of M effects uncertain" basis. Nothing in it depends on the number of threads, so the same
+ * seed gives the same bytes.
  */
 export function uncertaintyJson(result: UncertaintyResult, sensitivity: SensitivityResult): object {
   const { plan, summary } = result;
   const { scenario } = plan.prepared;
-  const objectiveUnit = plan.prepared.objective === "ksi" ? "KSI crashes" : scenario.currency;
+  const objectiveUnit = plan.prepared.objective === "ksi" ? "K+A crashes" : scenario.currency;
+  const effectsUncertain = effectsUncertainText(result.effects);
+  const project = (site: string, treatments: readonly string[]) => `${site}: ${treatments.join(" + ")}`;
   return {
     scenario: scenario.name,
     currency: scenario.currency,
@@ -44,15 +56,29 @@ export function uncertaintyJson(result: UncertaintyResult, sensitivity: Sensitiv
     objective: plan.prepared.objective,
     draws: result.draws,
     seed: result.seed,
+    definitions: UNCERTAINTY_DEFINITIONS,
     method: {
-      cmf: CMF_SAMPLING_RULE,
+      cmf: cmfSamplingRule(result.effects.assumedCmfCv),
+      assumedCmfCv: result.effects.assumedCmfCv,
+      effects: {
+        total: result.effects.total,
+        uncertain: result.effects.withStandardError + result.effects.withAssumedCv,
+        withStandardError: result.effects.withStandardError,
+        withAssumedCv: result.effects.withAssumedCv,
+        heldExact: result.effects.heldExact,
+      },
+      effectsUncertain,
+      effectsWithStandardError: result.effects.withStandardError,
+      effectsWithoutStandardError: result.effects.total - result.effects.withStandardError,
       baseline: result.sampleBaselines ? BASELINE_SAMPLING_RULE : "baselines held at their point estimates (--fixed-baseline)",
-      effectsWithStandardError: result.effectsWithStandardError,
-      effectsWithoutStandardError: result.effectsWithoutStandardError,
-      sitesWithFixedBaseline: result.sitesWithFixedBaseline,
+      baselineSites: result.baselines,
+      baselinesDrawn: baselinesDrawnText(result.baselines),
+      sitesWithFixedBaseline: result.baselines.fixed,
       percentiles: "Hyndman–Fan type 7 (linear interpolation, as R and NumPy by default)",
       coreProbability: CORE_PROBABILITY,
       marginalProbability: MARGINAL_PROBABILITY,
+      shakyProbability: SHAKY_PROBABILITY,
+      shakyRule: REPLACEMENT_RULE,
     },
     plan: {
       status: plan.solution.status,
@@ -70,9 +96,11 @@ export function uncertaintyJson(result: UncertaintyResult, sensitivity: Sensitiv
       benefitPV: spread(summary.planBenefitPV),
       bcRatio: spread(summary.planBcRatio),
       probabilityBcAboveOne: summary.probabilityBcAboveOne,
+      effectsUncertain,
       planInfeasibleDraws: summary.planInfeasibleDraws,
       regret: { unit: objectiveUnit, ...spread(summary.regret) },
     },
+    selectionsEffectsUncertain: effectsUncertain,
     selections: summary.selections.map((s) => ({
       site: s.site,
       treatments: s.treatments,
@@ -80,8 +108,17 @@ export function uncertaintyJson(result: UncertaintyResult, sensitivity: Sensitiv
       inPlan: s.inPlan,
       class: s.class,
     })),
-    core: summary.selections.filter((s) => s.class === "core").map((s) => `${s.site}: ${s.treatments.join(" + ")}`),
-    marginal: summary.selections.filter((s) => s.class === "marginal").map((s) => `${s.site}: ${s.treatments.join(" + ")}`),
+    core: summary.selections.filter((s) => s.class === "core").map((s) => project(s.site, s.treatments)),
+    marginal: summary.selections.filter((s) => s.class === "marginal").map((s) => project(s.site, s.treatments)),
+    shakyProjects: summary.shaky.map((s) => ({
+      site: s.site,
+      treatments: s.treatments,
+      cost: s.cost,
+      probability: s.probability,
+      effectsUncertain,
+      drawsWithout: s.drawsWithout,
+      replacedBy: s.replacements.map((r) => ({ site: r.site, treatments: r.treatments, cost: r.cost, shareOfDrawsWithout: r.shareOfDrawsWithout, shareOfDrawsWith: r.shareOfDrawsWith })),
+    })),
     sensitivity: {
       baseKsiAvoided: sensitivity.baseKsiAvoided,
       baseBcRatio: jsonNumber(sensitivity.baseBcRatio),

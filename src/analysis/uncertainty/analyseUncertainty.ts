@@ -1,4 +1,4 @@
-import { hasStandardError } from "../../model/sampleTreatmentCmfs.js";
+import { assumedCmfCv, drawnStandardError, hasStandardError } from "../../model/sampleTreatmentCmfs.js";
 import type { SolveOptions } from "../../solver/index.js";
 import { planProgramme, type PlanResult } from "../planProgramme.js";
 import type { PreparedPlan } from "../preparePlan.js";
@@ -18,17 +18,37 @@ export interface UncertaintyOptions {
   readonly onProgress?: (done: number, total: number) => void;
 }
 
+/** How the draws treated the CMF effects of the treatments that some site may get. */
+export interface EffectUncertainty {
+  /** The scenario's uncertainty.assumedCmfCv (or its default). */
+  readonly assumedCmfCv: number | "off";
+  readonly total: number;
+  /** Drawn with their published standard error. */
+  readonly withStandardError: number;
+  /** Drawn with the assumed CV: they publish no standard error. */
+  readonly withAssumedCv: number;
+  /** Held at their CMF in every draw. */
+  readonly heldExact: number;
+}
+
+/** How the draws treated the baselines of the sites that have at least one alternative. */
+export interface BaselineUncertainty {
+  /** Drawn from the Jeffreys-prior posterior of their observed counts. */
+  readonly observed: number;
+  /** Drawn from their Empirical Bayes gamma posterior. */
+  readonly empiricalBayes: number;
+  /** Held at their point estimate (no posterior for their method, or --fixed-baseline). */
+  readonly fixed: number;
+}
+
 /** The chosen list and what the draws say about it. */
 export interface UncertaintyResult {
   readonly plan: PlanResult;
   readonly draws: number;
   readonly seed: number;
   readonly sampleBaselines: boolean;
-  /** Effects (of treatments that some site may get) whose CMF was drawn, and those held at their CMF. */
-  readonly effectsWithStandardError: number;
-  readonly effectsWithoutStandardError: number;
-  /** Sites whose baseline method has no posterior to draw from, held at their point estimate. */
-  readonly sitesWithFixedBaseline: number;
+  readonly effects: EffectUncertainty;
+  readonly baselines: BaselineUncertainty;
   readonly summary: DrawSummary;
 }
 
@@ -47,19 +67,31 @@ export async function analyseUncertainty(prepared: PreparedPlan, options: Uncert
   const outcomes = await runDrawsInParallel(prepared, plan.solution.choice, options.draws, options.threads, settings, (done) =>
     options.onProgress?.(done, options.draws),
   );
-  const candidateIds = new Set(prepared.sites.flatMap((entry) => entry.alternatives.flatMap((alternative) => alternative.treatments)));
-  const effects = prepared.scenario.catalogue.treatments.filter((t) => candidateIds.has(t.id)).flatMap((t) => t.effects);
-  const withError = effects.filter(hasStandardError).length;
   return {
     plan,
     draws: options.draws,
     seed: options.seed,
     sampleBaselines: options.sampleBaselines,
-    effectsWithStandardError: withError,
-    effectsWithoutStandardError: effects.length - withError,
-    sitesWithFixedBaseline: options.sampleBaselines
-      ? prepared.sites.filter((entry, index) => entry.alternatives.length > 0 && prepared.baselines[index]!.method !== "observed").length
-      : prepared.sites.filter((entry) => entry.alternatives.length > 0).length,
+    effects: effectUncertainty(prepared),
+    baselines: baselineUncertainty(prepared, options.sampleBaselines),
     summary: summariseDraws(plan, outcomes),
   };
+}
+
+function effectUncertainty(prepared: PreparedPlan): EffectUncertainty {
+  const cv = assumedCmfCv(prepared.scenario);
+  const candidateIds = new Set(prepared.sites.flatMap((entry) => entry.alternatives.flatMap((alternative) => alternative.treatments)));
+  const effects = prepared.scenario.catalogue.treatments.filter((t) => candidateIds.has(t.id)).flatMap((t) => t.effects);
+  const withStandardError = effects.filter(hasStandardError).length;
+  const drawn = effects.filter((effect) => drawnStandardError(effect, cv) > 0).length;
+  return { assumedCmfCv: cv, total: effects.length, withStandardError, withAssumedCv: drawn - withStandardError, heldExact: effects.length - drawn };
+}
+
+// Keyed on each site's own method: a scenario may mix observed and Empirical Bayes sites.
+function baselineUncertainty(prepared: PreparedPlan, sampleBaselines: boolean): BaselineUncertainty {
+  const methods = prepared.sites.flatMap((entry, index) => (entry.alternatives.length > 0 ? [prepared.baselines[index]!.method] : []));
+  if (!sampleBaselines) return { observed: 0, empiricalBayes: 0, fixed: methods.length };
+  const observed = methods.filter((method) => method === "observed").length;
+  const empiricalBayes = methods.filter((method) => method === "empirical-bayes").length;
+  return { observed, empiricalBayes, fixed: methods.length - observed - empiricalBayes };
 }

@@ -2,6 +2,7 @@ import { quantileSorted } from "../../model/quantile.js";
 import type { SolveStatus } from "../../solver/index.js";
 import type { PlanResult } from "../planProgramme.js";
 import type { DrawOutcome } from "./evaluateDraw.js";
+import { shakyProjects, type ShakyProject } from "./shakyProjects.js";
 
 /** Selected in at least this share of draws: the core of the list. */
 export const CORE_PROBABILITY = 0.9;
@@ -46,6 +47,8 @@ export interface DrawSummary {
   readonly regret: Spread;
   /** Every site-alternative in the plan or selected in some draw, most often selected first. */
   readonly selections: readonly SelectionFrequency[];
+  /** Funded projects selected in fewer than half of the draws' best lists, largest cost first, with what replaces them. */
+  readonly shaky: readonly ShakyProject[];
 }
 
 /** Spread of values (any order). */
@@ -66,7 +69,8 @@ function classify(probability: number): SelectionClass {
 /**
  * Summarises draw outcomes (in draw order, so sums are the same whatever thread ran them):
  * the chosen list's KSI avoided, benefit PV and B/C spreads, P(B/C > 1), each site-alternative's
- * selection probability with its class (core ≥ 90%, marginal ≥ 10%, rare), and the regret.
+ * selection probability with its class (core ≥ 90%, marginal ≥ 10%, rare), the regret, and the
+ * shaky funded projects (`shakyProjects`).
  */
 export function summariseDraws(plan: PlanResult, outcomes: readonly DrawOutcome[]): DrawSummary {
   if (outcomes.length === 0) throw new RangeError("no draws to summarise");
@@ -108,5 +112,6 @@ export function summariseDraws(plan: PlanResult, outcomes: readonly DrawOutcome[
     planInfeasibleDraws: ordered.filter((o) => !o.planFeasible).length,
     regret: solvedDraws > 0 ? spreadOf(regrets) : { mean: Number.NaN, p5: Number.NaN, p50: Number.NaN, p95: Number.NaN },
     selections,
+    shaky: shakyProjects(plan, ordered),
   };
 }

@@ -1,4 +1,5 @@
 import type { SelectionFrequency } from "../../analysis/uncertainty/summariseDraws.js";
+import { effectsUncertainText } from "../effectsUncertainText.js";
 import { formatFixed, formatMoney } from "../formatNumber.js";
 import { escapeHtml } from "./escapeHtml.js";
 import { fundedReason } from "./fundedReason.js";
@@ -36,7 +37,7 @@ export function capitalListSection(input: ReportInput): string {
   const robustnessNote =
     uncertainty === undefined
       ? ""
-      : ` "Selected in draws" is the share of ${drawCount} uncertainty draws whose optimal list includes the project: <strong>core</strong> at 90% or more, <strong>marginal</strong> at 10% or more (see Robustness).`;
+      : ` "Selected in draws" is the share of ${drawCount} uncertainty draws (${escapeHtml(effectsUncertainText(uncertainty.draws.effects))}) whose optimal list includes the project: <strong>core</strong> at 90% or more, <strong>marginal</strong> at 10% or more (see Robustness).`;
   const flagged = planCase.upgrades.filter((check) => check.forKsiNotMoney).length;
   const flagNote = flagged === 0 ? "" : ` ${flagged} project${flagged === 1 ? " is an upgrade" : "s are upgrades"} whose extra cost over the next cheaper option at the site returns less than it costs (incremental B/C below 1; Highway Safety Manual, Part B, Chapter 7): marked "chosen for K+A crashes avoided, not money".`;
   const empty = plan.funded.length === 0 ? `<tbody><tr><td colspan="${columns}">No project is funded at this budget.</td></tr></tbody>` : "";

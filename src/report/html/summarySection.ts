@@ -2,8 +2,9 @@ import { formatFixed, formatMoney } from "../formatNumber.js";
 import { rankingComparisonText } from "../rankingComparisonText.js";
 import { escapeHtml } from "./escapeHtml.js";
 import type { ReportInput } from "./ReportInput.js";
+import { shakyProjectsNote } from "./shakyProjectsNote.js";
 
-/** The key figures a finance reader needs first: budget, spend, K+A crashes avoided, PVs, B/C, NPV, and the gain over a B/C ranking. */
+/** The key figures a finance reader needs first: budget, spend, K+A crashes avoided, PVs, B/C, NPV, the gain over a B/C ranking, and shaky projects when draws were run. */
 export function summarySection(input: ReportInput): string {
   const { plan } = input;
   const { totals, solution } = plan;
@@ -32,6 +33,7 @@ ${figure("npv", "Net present value", `${formatMoney(totals.npv)} <span class="un
 ${figure("cost-per-ksi", "Cost per K+A crash avoided", `${formatMoney(totals.costPerKsi)} <span class="unit">${currency}</span>`, "lifecycle cost PV ÷ K+A crashes avoided")}
 </div>
 ${rankingGain(input)}
+${shakyProjectsNote(input)}
 </section>`;
 }
 

@@ -1,15 +1,22 @@
 import { describe, expect, it } from "vitest";
 import { preparePlan } from "../../../src/analysis/preparePlan.js";
 import { analyseUncertainty } from "../../../src/analysis/uncertainty/analyseUncertainty.js";
+import { drawSites } from "../../../src/analysis/uncertainty/drawSites.js";
 import { loadScenario } from "../../../src/io/loadScenario.js";
+import { sumCrashMatrix } from "../../../src/model/crashMatrix.js";
+import { empiricalBayesCrashesPerYear } from "../../../src/model/empiricalBayesCrashesPerYear.js";
+import { empiricalBayesPosterior } from "../../../src/model/empiricalBayesPosterior.js";
+import { windowYears } from "../../../src/model/siteBaselines.js";
 import type { Scenario } from "../../../src/model/types.js";
 import { constructedScenario } from "./constructedScenario.js";
 
 const baseOptions = { seed: 2027, threads: 1, solveOptions: {} } as const;
 
+// Every CMF held exact: no standard errors, and no assumed CV for effects without one.
 function withoutStandardErrors(scenario: Scenario): Scenario {
   return {
     ...scenario,
+    uncertainty: { assumedCmfCv: "off" },
     catalogue: {
       ...scenario.catalogue,
       treatments: scenario.catalogue.treatments.map((t) => ({ ...t, effects: t.effects.map((e) => ({ ...e, standardError: 0 })) })),
@@ -22,7 +29,8 @@ describe("analyseUncertainty", () => {
     const { scenario } = loadScenario("scenarios/demo.yaml");
     const prepared = preparePlan(withoutStandardErrors(scenario));
     const result = await analyseUncertainty(prepared, { ...baseOptions, draws: 4, sampleBaselines: false, budget: scenario.budget });
-    expect(result.effectsWithStandardError).toBe(0);
+    expect(result.effects.withStandardError + result.effects.withAssumedCv).toBe(0);
+    expect(result.effects.heldExact).toBe(result.effects.total);
     const { selections } = result.summary;
     const planSet = new Set(result.plan.funded.map((p) => `${p.entry.site.id}#${p.index}`));
     expect(planSet.size).toBeGreaterThan(10);
@@ -49,7 +57,7 @@ describe("analyseUncertainty", () => {
       ],
       2,
     );
-    const result = await analyseUncertainty(preparePlan(scenario), { ...baseOptions, draws: 300, sampleBaselines: false, budget: scenario.budget });
+    const result = await analyseUncertainty(preparePlan({ ...scenario, uncertainty: { assumedCmfCv: "off" } }), { ...baseOptions, draws: 300, sampleBaselines: false, budget: scenario.budget });
     const bySite = new Map(result.summary.selections.map((s) => [s.site, s]));
     expect(bySite.get("A")!.class).toBe("core");
     expect(bySite.get("A")!.probability).toBe(1);
@@ -57,13 +65,15 @@ describe("analyseUncertainty", () => {
     // 300 draws: standard error of the share is sqrt(0.7 × 0.3 / 300) = 0.026; allow 4 of them.
     expect(Math.abs(bySite.get("B")!.probability - 0.7)).toBeLessThan(4 * 0.026);
     expect(bySite.get("C")!.probability).toBeCloseTo(1 - bySite.get("B")!.probability, 12);
-    expect(result.effectsWithStandardError).toBe(1);
-    expect(result.effectsWithoutStandardError).toBe(2);
+    expect(result.effects).toEqual({ assumedCmfCv: "off", total: 3, withStandardError: 1, withAssumedCv: 0, heldExact: 2 });
     expect(result.summary.regret.mean).toBeGreaterThan(0);
   });
 
-  it("draws baselines around the observed rate: the chosen list's mean KSI avoided is the plan's within sampling error", async () => {
-    // Certain CMFs, so only the Poisson-gamma baseline varies; Gamma(n, T) has mean n/T (the observed rate).
+  it("draws observed baselines from the Jeffreys posterior: the chosen list's mean K+A avoided is (n + 1/2)/T per severity, within sampling error", async () => {
+    // Certain CMFs, so only the baselines vary. Each site saw n serious (A) crashes and no fatal (K)
+    // ones in T = 5 years; under the Jeffreys prior the A rate is Gamma(n + 1/2, T) and the K rate
+    // Gamma(1/2, T) (conjugate gamma–Poisson; Gelman et al., Bayesian Data Analysis, 3rd ed., from
+    // memory), spread over the site's K+A crash-type mix (all angle), where its treatment acts.
     const scenario = constructedScenario(
       [
         { id: "A", fatalAndSerious: 16, cmf: 0.6, standardError: 0 },
@@ -72,12 +82,48 @@ describe("analyseUncertainty", () => {
       2,
     );
     const draws = 400;
-    const result = await analyseUncertainty(preparePlan(scenario), { ...baseOptions, draws, sampleBaselines: true, budget: scenario.budget });
+    const prepared = preparePlan({ ...scenario, uncertainty: { assumedCmfCv: "off" } });
+    const result = await analyseUncertainty(prepared, { ...baseOptions, draws, sampleBaselines: true, budget: scenario.budget });
     const planKsi = result.plan.totals.ksiAvoided;
-    // KSI avoided = 10 years × (0.4 × rateA + 0.2 × rateB); Var(rate) = n / T² (gamma): hand-computed sd below.
-    const sd = 10 * Math.sqrt(0.4 ** 2 * (16 / 25) + 0.2 ** 2 * (9 / 25));
+    // The plan keeps the observed rate n/T: 10 years × (0.4 × 16/5 + 0.2 × 9/5).
     expect(planKsi).toBeCloseTo(10 * (0.4 * 16 / 5 + 0.2 * 9 / 5), 9);
-    expect(Math.abs(result.summary.planKsiAvoided.mean - planKsi)).toBeLessThan((4 * sd) / Math.sqrt(draws));
+    // The draws: K+A rate mean (n + 1/2 + 1/2)/T, variance (n + 1)/T² (gamma: shape/rate, shape/rate²).
+    const mean = 10 * (0.4 * (17 / 5) + 0.2 * (10 / 5));
+    const sd = 10 * Math.sqrt(0.4 ** 2 * (17 / 25) + 0.2 ** 2 * (10 / 25));
+    expect(Math.abs(result.summary.planKsiAvoided.mean - mean)).toBeLessThan((4 * sd) / Math.sqrt(draws));
+    expect(result.summary.planKsiAvoided.mean).toBeGreaterThan(planKsi);
     expect(result.summary.planKsiAvoided.p95 - result.summary.planKsiAvoided.p5).toBeGreaterThan(2 * sd);
+    expect(result.baselines).toEqual({ observed: 2, empiricalBayes: 0, fixed: 0 });
+  });
+});
+
+describe("drawSites with Empirical Bayes baselines", () => {
+  it("draws each EB site from its gamma posterior: its K+A avoided averages the plan's within the standard error of relative variance 1/shape", async () => {
+    // With CMFs exact, an alternative's K+A avoided is linear in the baseline, so drawn / planned is
+    // λ / E[λ] with λ ~ Gamma(1/k + n, 1/(kμ) + T): mean 1 and variance 1/shape (Hauer 1997, ch. 7; HSM 2010 Part C, App. A).
+    const { scenario } = loadScenario("scenarios/demo-eb.yaml");
+    const prepared = preparePlan(withoutStandardErrors(scenario));
+    const years = windowYears(scenario);
+    const spfs = new Map(scenario.catalogue.performanceFunctions.map((spf) => [spf.id, spf]));
+    const draws = 400;
+    const settings = { seed: 99, sampleBaselines: true, budget: scenario.budget, solveOptions: {} };
+    const sums = prepared.sites.map(() => 0);
+    for (let draw = 0; draw < draws; draw += 1) {
+      drawSites(prepared, draw, settings).forEach((entry, index) => {
+        const planned = prepared.sites[index]!.alternatives[0];
+        if (planned !== undefined && planned.ksiAvoided > 0) sums[index]! += entry.alternatives[0]!.ksiAvoided / planned.ksiAvoided;
+      });
+    }
+    let checked = 0;
+    prepared.sites.forEach((entry, index) => {
+      if (entry.alternatives[0] === undefined || !(entry.alternatives[0].ksiAvoided > 0)) return;
+      expect(prepared.baselines[index]!.method).toBe("empirical-bayes");
+      const estimate = empiricalBayesCrashesPerYear(entry.site, spfs.get(entry.site.performanceFunction!)!, years);
+      const { shape } = empiricalBayesPosterior(estimate.predictedPerYear, estimate.overdispersion, sumCrashMatrix(entry.site.crashes), years);
+      // Five standard errors of a mean of `draws` ratios.
+      expect(Math.abs(sums[index]! / draws - 1)).toBeLessThan(5 * Math.sqrt(1 / shape / draws));
+      checked += 1;
+    });
+    expect(checked).toBeGreaterThan(30);
   });
 });

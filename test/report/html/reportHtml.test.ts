@@ -136,7 +136,44 @@ describe("reportHtml: robustness and sensitivity from the uncertainty analysis",
       expect(block).toContain(`class="num selection ${selection.class}" data-probability="${selection.probability}"`);
     }
     const core = inPlan.filter((s) => s.class === "core").length;
-    expect(html).toMatch(new RegExp(`id="robustness-classes">Of the ${inPlan.length} funded projects, <strong>${core}</strong> are`));
+    expect(html).toMatch(new RegExp(`id="robustness-classes">Selection shares, [^<]*<span class="effects-uncertain">[^<]+</span>: of the ${inPlan.length} funded projects, <strong>${core}</strong> are`));
+  });
+
+  it("states beside every probability how many effects were uncertain, and labels K+A crashes", () => {
+    const html = reportHtml({ ...base, uncertainty });
+    const section = html.slice(html.indexOf('<section id="robustness">'), html.indexOf("</section>", html.indexOf('<section id="robustness">')));
+    const { effects } = uncertainty.draws;
+    // The demo catalogue: 7 of its candidates' effects publish a standard error; the rest take the default CV.
+    expect(effects.withStandardError).toBe(7);
+    expect(effects.heldExact).toBe(0);
+    const basis = `${effects.total} of ${effects.total} effects uncertain (7 with a published standard error, ${effects.total - 7} with the assumed CV)`;
+    const { draws, summary } = uncertainty.draws;
+    expect(section).toContain(`(${Math.round(summary.probabilityBcAboveOne * draws)} of ${draws}; <span class="effects-uncertain">${basis}</span>)`);
+    expect(section).toContain("K+A crashes avoided");
+    expect(section).not.toContain("KSI crashes avoided");
+    expect(section).toContain("0.2 × CMF");
+    expect(section).toContain("Jeffreys prior");
+    const list = html.slice(html.indexOf('<section id="capital-list">'), html.indexOf("</section>", html.indexOf('<section id="capital-list">')));
+    expect(list).toContain(basis);
+  });
+
+  it("flags the shaky funded projects in the summary, largest cost first, with what would replace each", () => {
+    const html = reportHtml({ ...base, uncertainty });
+    const { shaky } = uncertainty.draws.summary;
+    const summary = html.slice(html.indexOf('<section id="summary">'), html.indexOf("</section>", html.indexOf('<section id="summary">')));
+    expect(summary).toContain(`id="summary-shaky" data-shaky="${shaky.length}"`);
+    // Every funded project below half the draws, and no other, in order of falling cost.
+    const expected = uncertainty.draws.summary.selections.filter((s) => s.inPlan && s.probability < 0.5).map((s) => s.site);
+    expect(shaky.map((s) => s.site).sort()).toEqual(expected.sort());
+    expect(shaky.length).toBeGreaterThan(0);
+    for (let i = 1; i < shaky.length; i += 1) expect(shaky[i - 1]!.cost).toBeGreaterThanOrEqual(shaky[i]!.cost);
+    const listed = [...summary.matchAll(/<li data-site="([^"]+)"/g)].map((match) => match[1]);
+    expect(listed).toEqual(shaky.map((s) => s.site));
+    for (const project of shaky) {
+      const item = summary.slice(summary.indexOf(`<li data-site="${project.site}"`), summary.indexOf("</li>", summary.indexOf(`<li data-site="${project.site}"`)));
+      for (const replacement of project.replacements) expect(item).toContain(`<span class="site-id">${replacement.site}</span>`);
+    }
+    expect(reportHtml(base)).not.toContain('id="summary-shaky"');
   });
 
   it("draws the tornado inline and lists every sensitivity row", () => {

@@ -90,6 +90,9 @@ describe("the demo catalogue's SPFs reproduce reference values", () => {
     // HSM chapter 10 base SPF, 10 000 × 1.5 × 365e-6 × e^-0.312 = 4.0076 (from memory of the manual's
     // rural two-lane sample problem). A factor-of-10 typo in AADT scale or intercept would give 0.40 or 40.
     expect(predictedCrashesPerYear(spfs.get("rural-two-lane-segment")!, "segment", 10000, 1.5 * 1.609344)).toBeCloseTo(4.0076, 2);
+    // The published form itself, to five significant figures: an intercept rounded to -8.7035 misses it.
+    const published = 10000 * 1.5 * 365e-6 * Math.exp(-0.312);
+    expect(predictedCrashesPerYear(spfs.get("rural-two-lane-segment")!, "segment", 10000, 1.5 * 1.609344)).toBeCloseTo(published, 4);
   });
   it("urban four-leg signalised intersection matches exp(-10.99 + 1.07 ln 20 000 + 0.23 ln 6 000)", () => {
     // HSM chapter 12 coefficients (from memory), minor AADT 30 % of major as the catalogue assumes.

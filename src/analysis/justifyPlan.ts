@@ -2,6 +2,7 @@ import type { Alternative } from "../model/types.js";
 import { objectiveValue } from "./buildProgramme.js";
 import { lpBudgetMarginalValue } from "../solver/index.js";
 import type { PlanResult } from "./planProgramme.js";
+import { byBcRatioDescending } from "../model/benefitCostRatio.js";
 
 /** A funded project's case: its economics and where it stands by B/C among the funded. */
 export interface FundedCase {
@@ -88,7 +89,7 @@ export function justifyPlan(result: PlanResult): PlanJustification {
   const lambda = fromSolver ?? lpBudgetMarginalValue(programme);
   const source = fromSolver !== undefined ? "solver" : lambda !== undefined ? "lp-relaxation" : "unavailable";
 
-  const byBc = [...result.funded].sort((x, y) => y.alternative.bcRatio - x.alternative.bcRatio);
+  const byBc = [...result.funded].sort((x, y) => byBcRatioDescending(x.alternative.bcRatio, y.alternative.bcRatio));
   const rank = new Map(byBc.map((project, index) => [project.entry.site.id, index + 1]));
   const funded: FundedCase[] = result.funded.map(({ entry, alternative }) => ({
     site: entry.site.id,
@@ -115,7 +116,7 @@ export function justifyPlan(result: PlanResult): PlanJustification {
       );
       continue;
     }
-    const bestBc = Math.max(...entry.alternatives.map((alternative) => alternative.bcRatio));
+    const bestBc = entry.alternatives.map((alternative) => alternative.bcRatio).sort(byBcRatioDescending)[0]!;
     const threshold = lambda === undefined ? null : entryThreshold(entry.alternatives, objective, lambda);
     if (entry.alternatives.every((alternative) => objectiveValue(alternative, objective) <= 0)) {
       notFunded.push({ ...base, reason: "no-effect", explanation: `no alternative avoids any ${objective === "ksi" ? "K+A crash" : "crash cost"}`, bestBcRatio: bestBc, threshold: null });

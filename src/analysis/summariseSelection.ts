@@ -1,4 +1,5 @@
 import type { Alternative } from "../model/types.js";
+import { benefitCostRatio } from "../model/benefitCostRatio.js";
 
 /** Programme totals over a set of chosen alternatives. */
 export interface ProgrammeTotals {
@@ -35,7 +36,7 @@ export function summariseSelection(chosen: readonly Alternative[]): ProgrammeTot
     ksiAvoidedPerYear,
     benefitPV,
     lifecycleCostPV,
-    bcRatio: lifecycleCostPV > 0 ? benefitPV / lifecycleCostPV : 0,
+    bcRatio: benefitCostRatio(benefitPV, lifecycleCostPV),
     npv: benefitPV - lifecycleCostPV,
     costPerKsi: ksiAvoided > 0 ? lifecycleCostPV / ksiAvoided : Infinity,
   };

@@ -2,6 +2,7 @@ import type { Alternative } from "../model/types.js";
 import { checkSolution } from "../solver/index.js";
 import type { PlanResult } from "./planProgramme.js";
 import { summariseSelection, type ProgrammeTotals } from "./summariseSelection.js";
+import { byBcRatioDescending } from "../model/benefitCostRatio.js";
 
 /** The list a B/C ranking would fund at the same budget, against the optimal list. */
 export interface RankingComparison {
@@ -59,7 +60,7 @@ export function traditionalRanking(result: PlanResult): RankingComparison {
   const rest = prepared.sites
     .map((entry, g) => ({ entry, g }))
     .filter(({ entry, g }) => !entry.required && best[g] !== null && entry.alternatives[best[g]!]!.bcRatio > 0)
-    .sort((x, y) => y.entry.alternatives[best[y.g]!]!.bcRatio - x.entry.alternatives[best[x.g]!]!.bcRatio || (x.entry.site.id < y.entry.site.id ? -1 : 1));
+    .sort((x, y) => byBcRatioDescending(x.entry.alternatives[best[x.g]!]!.bcRatio, y.entry.alternatives[best[y.g]!]!.bcRatio) || (x.entry.site.id < y.entry.site.id ? -1 : 1));
   for (const { g } of rest) fund(g);
   const chosen = choice.flatMap((a, g) => (a === null ? [] : [prepared.sites[g]!.alternatives[a]!]));
   const totals = summariseSelection(chosen);

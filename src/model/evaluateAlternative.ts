@@ -4,6 +4,7 @@ import { lifecycleCostPV, yearsInService } from "./lifecycleCostPV.js";
 import { treatmentCmf } from "./treatmentCmf.js";
 import { treatmentCapitalCost } from "./treatmentCapitalCost.js";
 import { CRASH_TYPES, KSI_SEVERITIES, SEVERITIES, type Alternative, type CrashMatrix, type Economics, type RenewalRule, type Severity, type Site, type Treatment } from "./types.js";
+import { benefitCostRatio } from "./benefitCostRatio.js";
 
 /** How benefits are counted when treatments in one alternative have different service lives, by renewal rule. */
 export function describeServiceLives(renewal: RenewalRule): string {
@@ -80,7 +81,7 @@ export function evaluateAlternative(
     crashesAvoidedPerYear: firstYear === undefined ? { K: 0, A: 0, B: 0, C: 0, O: 0 } : scaleSeverities(firstYear, crashGrowthPerYear),
     ksiAvoided,
     benefitPV,
-    bcRatio: lifecycle > 0 ? benefitPV / lifecycle : benefitPV > 0 ? Infinity : 0,
+    bcRatio: benefitCostRatio(benefitPV, lifecycle),
     npv: benefitPV - lifecycle,
     costPerKsi: ksiAvoided > 0 ? lifecycle / ksiAvoided : Infinity,
     effectiveYears: ends[ends.length - 1] ?? 0,

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { SensitivityCase, SensitivityResult } from "../../src/analysis/uncertainty/oneAtATimeSensitivity.js";
 import { progressBar } from "../../src/report/progressBar.js";
-import { tornadoSvg } from "../../src/report/tornadoSvg.js";
+import { tornadoSvg, wrapLabel } from "../../src/report/tornadoSvg.js";
 
 const unchanged = { entering: [], leaving: [] };
 function sensitivityCase(label: string, ksiAvoidedChange: number, bcRatioChange: number, listChanges: boolean): SensitivityCase {
@@ -31,6 +31,25 @@ describe("tornadoSvg", () => {
   it("escapes text so the SVG stays well-formed", () => {
     expect(svg).toContain("CMF a &amp; &lt;b&gt;");
     expect(svg).not.toContain("<b>");
+  });
+});
+
+describe("tornado labels are wrapped, never cut", () => {
+  const long = "CMF of protected intersection with leading pedestrian interval and raised crossings (0.58 / 0.98)";
+  it("keeps every character of a long label over lines of at most 44 characters", () => {
+    const lines = wrapLabel(long);
+    expect(lines.length).toBeGreaterThan(1);
+    expect(lines.every((line) => line.length <= 44)).toBe(true);
+    expect(lines.join(" ")).toBe(long);
+    expect(wrapLabel("x".repeat(100)).join("")).toBe("x".repeat(100));
+  });
+  it("gives a wrapped row room for its lines and prints the whole label", () => {
+    const svg = tornadoSvg({ baseKsiAvoided: 10, baseBcRatio: 2, rows: [{ parameter: long.replace(/ \(.*\)$/, ""), base: "0.8", low: sensitivityCase("0.58", 1, 0.1, false), high: sensitivityCase("0.98", -1, -0.1, false) }] }, "t");
+    const spans = [...svg.matchAll(/<tspan x="10" y="([\d.]+)">([^<]*)<\/tspan>/g)];
+    expect(spans.map((m) => m[2]).join(" ")).toBe(long);
+    expect(svg).not.toContain("…");
+    const ys = spans.map((m) => Number(m[1]));
+    expect(ys[1]! - ys[0]!).toBe(14);
   });
 });
 

@@ -12,7 +12,8 @@ const MARGIN = { left: 64, right: 24, top: 18, bottom: 56 };
 
 /**
  * Inline SVG of K+A crashes avoided against budget over the frontier's levels (straight lines join the
- * computed levels), with the chosen budget marked and a ring the slider script moves.
+ * computed levels), with the chosen budget marked (drawn after the points, so no point hides it)
+ * and a ring the slider script moves.
  * Each level's point carries data-level (its index) and its coordinates.
  */
 export function frontierChartSvg(frontier: readonly FrontierLevel[], chosenBudget: number, currency: string): string {
@@ -45,7 +46,7 @@ export function frontierChartSvg(frontier: readonly FrontierLevel[], chosenBudge
   const chosen = frontier.find((level) => level.budget === chosenBudget);
   const chosenMark =
     chosen !== undefined && hasList(chosen.plan)
-      ? `<line class="chosen" x1="${x(chosenBudget)}" x2="${x(chosenBudget)}" y1="${MARGIN.top}" y2="${bottom}" stroke="${OKABE_ITO.vermillion}"/><path d="M${x(chosenBudget)},${y(chosen.plan.totals.ksiAvoided) - 8}l8,8l-8,8l-8,-8z" fill="${OKABE_ITO.vermillion}" stroke="#fff"/><text class="chosen-label" x="${x(chosenBudget) + (x(chosenBudget) > WIDTH * 0.7 ? -10 : 10)}" y="${bottom - 10}" text-anchor="${x(chosenBudget) > WIDTH * 0.7 ? "end" : "start"}">Chosen budget ${formatMoney(chosenBudget)}: ${formatFixed(chosen.plan.totals.ksiAvoided, 1)} K+A crashes avoided</text>`
+      ? `<line class="chosen" x1="${x(chosenBudget)}" x2="${x(chosenBudget)}" y1="${MARGIN.top}" y2="${bottom}" stroke="${OKABE_ITO.vermillion}"/><path class="chosen-marker" d="M${x(chosenBudget)},${y(chosen.plan.totals.ksiAvoided) - 8}l8,8l-8,8l-8,-8z" fill="${OKABE_ITO.vermillion}" stroke="#fff"/><text class="chosen-label" x="${x(chosenBudget) + (x(chosenBudget) > WIDTH * 0.7 ? -10 : 10)}" y="${bottom - 10}" text-anchor="${x(chosenBudget) > WIDTH * 0.7 ? "end" : "start"}">Chosen budget ${formatMoney(chosenBudget)}: ${formatFixed(chosen.plan.totals.ksiAvoided, 1)} K+A crashes avoided</text>`
       : "";
   const unsolved = frontier.length - solved.length;
   const note = unsolved > 0 ? `<text class="tick" x="${MARGIN.left}" y="${HEIGHT - 4}">${unsolved} level${unsolved === 1 ? "" : "s"} with no possible list (the rules cost more) not plotted</text>` : "";
@@ -55,9 +56,9 @@ ${grid}
 <line class="axis" x1="${MARGIN.left}" x2="${WIDTH - MARGIN.right}" y1="${bottom}" y2="${bottom}"/>${xAxis}
 <text class="axis-label" x="${MARGIN.left + plotWidth / 2}" y="${bottom + 38}" text-anchor="middle">Budget (${escapeHtml(currency)})</text>
 <text class="axis-label" transform="translate(16 ${MARGIN.top + plotHeight / 2}) rotate(-90)" text-anchor="middle">K+A crashes avoided</text>
-${chosenMark}
 <path class="frontier" d="${path}" fill="none" stroke="${OKABE_ITO.blue}" stroke-width="2"/>
 ${points}
+${chosenMark}
 <circle id="frontier-current" r="8" fill="none" stroke="${OKABE_ITO.black}" stroke-width="2" cx="-20" cy="-20" visibility="hidden"/>
 ${note}
 </svg>`;

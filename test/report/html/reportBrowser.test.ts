@@ -131,6 +131,33 @@ describe.skipIf(!browserPresent && !process.env.CI)("HTML report in headless chr
     expect(await page.locator("#capital-list td.selection").count()).toBe(frontier[chosenIndex]!.plan.funded.length);
   });
 
+  it("draws the chosen budget's marker above the frontier's points, where a pointer finds it", async () => {
+    const onTop = await page.evaluate(() => {
+      const marker = document.querySelector("#frontier-chart .chosen-marker")!;
+      marker.scrollIntoView({ block: "center" });
+      const box = marker.getBoundingClientRect();
+      return document.elementFromPoint(box.x + box.width / 2, box.y + box.height / 2)?.classList.contains("chosen-marker") ?? false;
+    });
+    expect(onTop).toBe(true);
+  });
+
+  it("prints every tornado label whole, inside the label column and clear of its neighbours", async () => {
+    const labels = await page.evaluate(() =>
+      [...document.querySelectorAll<SVGTextElement>("#sensitivity text.tornado-label")].map((text) => {
+        const box = text.getBBox();
+        const spans = [...text.querySelectorAll("tspan")].map((span) => span.textContent);
+        return { right: box.x + box.width, top: box.y, bottom: box.y + box.height, text: spans.join(" "), full: text.querySelector("title")!.textContent };
+      }),
+    );
+    expect(labels.length).toBeGreaterThan(3);
+    for (const label of labels) {
+      expect(label.text).toBe(label.full);
+      // The label column is 330 px wide, with the change dot at 322 ± 4 (tornadoSvg's layout).
+      expect(label.right).toBeLessThan(316);
+    }
+    for (let index = 1; index < labels.length; index += 1) expect(labels[index]!.top).toBeGreaterThanOrEqual(labels[index - 1]!.bottom - 0.5);
+  });
+
   it("opens the slider at the chosen budget with the capital list's totals", async () => {
     expect(Number(await page.locator("#budget-slider").inputValue())).toBe(chosenIndex);
     await expectLevel(chosenIndex);

@@ -6,9 +6,10 @@ import { MIN_RECOMMENDED_WINDOW_YEARS } from "../model/siteBaselines.js";
  * The data-quality account of a tally as plain text: where every row went (assigned, unassigned,
  * rejected by reason, adding up to the rows read), unassigned shares by district, years with
  * crashes per site, and the rejected rows with their lines. `maxListed` caps the row lists
- * (for the terminal); the saved report lists everything.
+ * (for the terminal); `savedTo` names the file that lists everything, when one was written, so
+ * a capped list never points at a report that does not exist.
  */
-export function crashQualityText(quality: CrashDataQuality, inputs: { readonly crashes: string; readonly sites: string }, maxListed = Infinity): string {
+export function crashQualityText(quality: CrashDataQuality, inputs: { readonly crashes: string; readonly sites: string }, maxListed = Infinity, savedTo?: string): string {
   const { window } = quality;
   const windowYears = window.lastYear - window.firstYear + 1;
   const rejectedCount = quality.rejected.length;
@@ -37,7 +38,7 @@ export function crashQualityText(quality: CrashDataQuality, inputs: { readonly c
   if (rejectedCount > 0) {
     lines.push("", "Rejected rows:");
     for (const row of quality.rejected.slice(0, maxListed)) lines.push(`  line ${row.line}: ${row.reason}: ${row.message}`);
-    if (rejectedCount > maxListed) lines.push(`  … and ${rejectedCount - maxListed} more (all are listed in the saved report)`);
+    if (rejectedCount > maxListed) lines.push(`  … and ${rejectedCount - maxListed} more (${savedTo === undefined ? "nothing was saved: fix the problem above and rerun to save the full list" : `all are listed in ${savedTo}`})`);
   }
   if (quality.unassigned > 0) {
     const shown = quality.unassignedLines.slice(0, maxListed);

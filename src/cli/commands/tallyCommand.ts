@@ -62,7 +62,7 @@ export function registerTallyCommand(program: Command, io: CliIo): void {
         throw new InputError([{ code: "nothing-assigned", file: options.crashes, message: noneAssigned(quality), hint: "check the --mapping columns (latitude and longitude not swapped or mis-mapped), --window, and that --crashes and --sites cover the same area; nothing was written" }]);
       }
       writeOutputFiles([{ path: options.out, content: sitesYaml(tallied, quality.window, provenance) }, { path: qualityFile, content: report }], options.force === true);
-      io.stderr(crashQualityText(quality, inputs, LISTED_ON_TERMINAL));
+      io.stderr(crashQualityText(quality, inputs, LISTED_ON_TERMINAL, qualityFile));
       if (window === undefined) {
         // One stray old record would otherwise stretch every site's window silently.
         const { firstYear, lastYear } = quality.window;

@@ -1,9 +1,15 @@
 import type { PlanResult } from "../analysis/planProgramme.js";
+import { csvPreamble } from "./csvPreamble.js";
+import { formatMoney } from "./formatNumber.js";
 import { toCsv } from "./toCsv.js";
 
-/** The funded list as CSV for spreadsheets: one row per project, units in the header. */
+/**
+ * The funded list as CSV for spreadsheets: the two preamble lines (scenario, budget, status,
+ * engine; units), then one row per project, units also in the column names.
+ */
 export function planCsv(result: PlanResult): string {
-  const currency = result.prepared.scenario.currency;
+  const { scenario } = result.prepared;
+  const currency = scenario.currency;
   const header = [
     "site_id",
     "site_name",
@@ -39,5 +45,13 @@ export function planCsv(result: PlanResult): string {
     methodBySite.get(entry.site.id) ?? "",
     alternative.sharedCells,
   ]);
-  return toCsv(header, rows);
+  const preamble = csvPreamble(
+    [`plan of scenario ${scenario.name}`, `budget ${formatMoney(result.budget)} ${currency}`, `objective ${result.prepared.objective}`, `status ${result.solution.status}`, `engine ${result.solution.engine}`, `${result.funded.length} projects`],
+    [
+      `money in ${currency} (whole currency units, not thousands; PV at ${(scenario.economics.discountRate * 100).toFixed(1)}% over ${scenario.economics.horizonYears} years)`,
+      "ksi_avoided: K+A crashes avoided over each project's service life within the horizon (crashes, not people)",
+      "bc_ratio: benefit PV / lifecycle cost PV (blank where undefined)",
+    ],
+  );
+  return preamble + toCsv(header, rows);
 }

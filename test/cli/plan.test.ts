@@ -75,8 +75,12 @@ describe("averta plan on the demo", () => {
     const { code, stdout } = await runCaptured(["plan", DEMO, "--format", "csv"]);
     expect(code).toBe(0);
     const lines = stdout.trim().split("\r\n");
-    expect(lines[0]).toContain("capital_cost_USD");
-    expect(lines).toHaveLength(json.selected.length + 1);
+    // Two preamble lines (what and units), then the column header, then the projects.
+    expect(lines[0]).toMatch(/^"# averta \| plan of scenario Vellmar/);
+    expect(lines[0]).toContain("status optimal");
+    expect(lines[1]).toMatch(/^"?# units \| money in USD/);
+    expect(lines[2]).toMatch(/^site_id,.*capital_cost_USD/);
+    expect(lines).toHaveLength(json.selected.length + 3);
   });
 
   it("--out writes the file, and never replaces an existing file without --force", async () => {

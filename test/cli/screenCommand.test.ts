@@ -1,3 +1,4 @@
+import { CSV_PREAMBLE_LINES } from "../../src/report/csvPreamble.js";
 import { describe, expect, it } from "vitest";
 import type { CliIo } from "../../src/cli/CliIo.js";
 import { runCli } from "../../src/cli/runCli.js";
@@ -22,7 +23,7 @@ describe("averta screen", () => {
     expect(parsed.proposed).toHaveLength(10);
     const csv = capture();
     expect(await runCli(["screen", "scenarios/demo.yaml", "-f", "csv"], csv)).toBe(0);
-    expect(csv.out.join("").trim().split("\r\n")).toHaveLength(52);
+    expect(csv.out.join("").trim().split("\r\n")).toHaveLength(CSV_PREAMBLE_LINES + 52);
   });
   it("rejects a bad --top with exit code 2", async () => {
     expect(await runCli(["screen", "scenarios/demo.yaml", "--top", "0"], capture())).toBe(2);

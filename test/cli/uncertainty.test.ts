@@ -162,7 +162,7 @@ describe("averta uncertainty on the demo", () => {
       ["uncertainty", DEMO, "--draws", "0"],
       ["uncertainty", DEMO, "--seed", "-1"],
       ["uncertainty", DEMO, "--threads", "two"],
-      ["uncertainty", DEMO, "--format", "csv"],
+      ["uncertainty", DEMO, "--format", "xml"],
       ["uncertainty", DEMO, "--tornado", join(folder, "chart.png")],
       ["uncertainty", "scenarios/no-such-scenario.yaml", "--draws", "2"],
       ["uncertainty", DEMO, "--draws", "2", "--out", existing],

@@ -1,3 +1,4 @@
+import { CSV_PREAMBLE_LINES } from "../../src/report/csvPreamble.js";
 import { beforeAll, describe, expect, it } from "vitest";
 import { planProgramme, type PlanResult } from "../../src/analysis/planProgramme.js";
 import { preparePlan } from "../../src/analysis/preparePlan.js";
@@ -20,7 +21,7 @@ beforeAll(async () => {
 
 describe("capital list CSV export", () => {
   it("neutralises formula-leading cells with a leading quote mark", () => {
-    const rows = parseCsv(planCsv(result));
+    const rows = parseCsv(planCsv(result)).slice(CSV_PREAMBLE_LINES);
     const names = rows.slice(1).map((row) => row[1]);
     for (const name of HOSTILE_NAMES) {
       expect(names).toContain(`'${name}`);
@@ -29,7 +30,7 @@ describe("capital list CSV export", () => {
   });
 
   it("round-trips through an RFC 4180 parser to the same numbers as the plan's JSON", () => {
-    const [header, ...rows] = parseCsv(planCsv(result));
+    const [header, ...rows] = parseCsv(planCsv(result)).slice(CSV_PREAMBLE_LINES);
     const json = planJson(result) as { selected: { site: string; cost: number; lifecycleCostPV: number; ksiAvoided: number; benefitPV: number; bcRatio: number | null; npv: number; costPerKsi: number | null }[] };
     expect(rows).toHaveLength(json.selected.length);
     expect(rows.length).toBeGreaterThan(0);

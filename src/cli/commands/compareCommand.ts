@@ -5,6 +5,7 @@ import { preparePlan } from "../../analysis/preparePlan.js";
 import { InputError } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
 import { checkOutputTarget } from "../../io/writeOutputFile.js";
+import { compareCsv } from "../../report/compareCsv.js";
 import { compareJson } from "../../report/compareJson.js";
 import { compareTable, type CompareLabels } from "../../report/compareTable.js";
 import { formatMoney } from "../../report/formatNumber.js";
@@ -29,12 +30,12 @@ export function registerCompareCommand(program: Command, io: CliIo): void {
     .argument("<scenario>", "scenario YAML file (A)")
     .argument("[other]", "second scenario YAML file (B); omit it and give --budget twice to compare two budgets")
     .option("-b, --budget <amount>", "a budget; give it twice (A then B) with one scenario, or once to use for both scenarios", collect, [])
-    .option("-f, --format <format>", "table or json", "table")
+    .option("-f, --format <format>", "table, json or csv", "table")
     .option("-o, --out <file>", "write to this file instead of standard output")
     .option("--force", "replace --out if it already exists")
     .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
     .action(async (file: string, other: string | undefined, options: CompareOptions) => {
-      const format = parseChoiceOption("--format", options.format, ["table", "json"] as const);
+      const format = parseChoiceOption("--format", options.format, ["table", "json", "csv"] as const);
       const engine = parseChoiceOption("--engine", options.engine, ENGINES);
       const budgets = options.budget.map((text) => parseAmountOption("--budget", text));
       if (other === undefined && budgets.length !== 2) {
@@ -57,7 +58,8 @@ export function registerCompareCommand(program: Command, io: CliIo): void {
           ? { a: `budget ${formatMoney(budgetA)}`, b: `budget ${formatMoney(budgetB)}`, currency: scenarioA.currency }
           : { a: `${file} at ${formatMoney(budgetA)}`, b: `${other} at ${formatMoney(budgetB)}`, currency: scenarioA.currency };
       const comparison = comparePlans(planA, planB);
-      const content = format === "json" ? JSON.stringify(compareJson(comparison, labels), null, 2) + "\n" : compareTable(comparison, labels);
+      const content =
+        format === "json" ? JSON.stringify(compareJson(comparison, labels), null, 2) + "\n" : format === "csv" ? compareCsv(comparison, labels) : compareTable(comparison, labels);
       emitOutput(io, content, options.out, options.force === true);
     });
 }

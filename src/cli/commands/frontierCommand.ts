@@ -70,7 +70,7 @@ export function registerFrontierCommand(program: Command, io: CliIo): void {
         format === "json"
           ? JSON.stringify(frontierJson(summary, context), null, 2) + "\n"
           : format === "csv"
-            ? frontierCsv(summary, scenario.currency)
+            ? frontierCsv(summary, context)
             : frontierTable(summary, context);
       if (options.chart !== undefined) {
         writeOutputFile(options.chart, frontierSvg(summary, context), force, "--chart");

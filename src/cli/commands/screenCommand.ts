@@ -34,7 +34,7 @@ export function registerScreenCommand(program: Command, io: CliIo): void {
       if (options.out !== undefined) checkOutputTarget(options.out, options.force === true);
       const { scenario } = loadScenario(file);
       const screening = screenSites(scenario, top);
-      const content = format === "json" ? JSON.stringify(screenJson(screening, scenario.name), null, 2) + "\n" : format === "csv" ? screenCsv(screening) : screenTable(screening, scenario.name, top);
+      const content = format === "json" ? JSON.stringify(screenJson(screening, scenario.name), null, 2) + "\n" : format === "csv" ? screenCsv(screening, scenario.name) : screenTable(screening, scenario.name, top);
       emitOutput(io, content, options.out, options.force === true);
     });
 }

@@ -7,6 +7,7 @@ import { loadScenario } from "../../io/loadScenario.js";
 import { checkDistinctOutputs, checkOutputTarget, writeOutputFile } from "../../io/writeOutputFile.js";
 import { progressBar } from "../../report/progressBar.js";
 import { tornadoSvg } from "../../report/tornadoSvg.js";
+import { uncertaintyCsv } from "../../report/uncertaintyCsv.js";
 import { uncertaintyJson } from "../../report/uncertaintyJson.js";
 import { uncertaintyTable } from "../../report/uncertaintyTable.js";
 import type { CliIo } from "../CliIo.js";
@@ -15,7 +16,7 @@ import { addDrawOptions, parseDrawOptions, type DrawOptionText } from "../drawOp
 import { parseAmountOption, parseChoiceOption } from "../parseOptionValues.js";
 import { ENGINES } from "./planCommand.js";
 
-const FORMATS = ["table", "json"] as const;
+const FORMATS = ["table", "json", "csv"] as const;
 
 interface UncertaintyCommandOptions extends DrawOptionText {
   budget?: string;
@@ -36,7 +37,7 @@ export function registerUncertaintyCommand(program: Command, io: CliIo): void {
   addDrawOptions(command, "Monte Carlo draws")
     .option("-b, --budget <amount>", "budget to use instead of the scenario's (4500000, 4.5M, 750k)")
     .option("--fixed-baseline", "hold site baselines at their point estimates; draw CMFs only")
-    .option("-f, --format <format>", "table or json", "table")
+    .option("-f, --format <format>", "table, json or csv (the selection probabilities)", "table")
     .option("-o, --out <file>", "write to this file instead of standard output")
     .option("--tornado <file.svg>", "also write the one-at-a-time sensitivity as a tornado chart (SVG)")
     .option("--force", "replace --out and --tornado files that already exist")
@@ -66,9 +67,15 @@ export function registerUncertaintyCommand(program: Command, io: CliIo): void {
         ...(io.stderrIsTty && { onProgress: (done: number, total: number) => io.stderr(progressBar(done, total)) }),
       });
       if (io.stderrIsTty) io.stderr("\n");
-      const sensitivity = await oneAtATimeSensitivity(result.plan, solveOptions);
-      const content = format === "json" ? JSON.stringify(uncertaintyJson(result, sensitivity), null, 2) + "\n" : uncertaintyTable(result, sensitivity);
-      if (options.tornado !== undefined) {
+      // The CSV holds the selection probabilities only, so it needs the sensitivity runs just for a tornado.
+      const sensitivity = format === "csv" && options.tornado === undefined ? undefined : await oneAtATimeSensitivity(result.plan, solveOptions);
+      const content =
+        format === "csv" || sensitivity === undefined
+          ? uncertaintyCsv(result)
+          : format === "json"
+            ? JSON.stringify(uncertaintyJson(result, sensitivity), null, 2) + "\n"
+            : uncertaintyTable(result, sensitivity);
+      if (options.tornado !== undefined && sensitivity !== undefined) {
         writeOutputFile(options.tornado, tornadoSvg(sensitivity, `${scenario.name}: one-at-a-time sensitivity`), force, "--tornado");
         io.stderr(`wrote ${options.tornado}\n`);
       }

@@ -1,3 +1,4 @@
+import { CSV_PREAMBLE_LINES } from "../../../src/report/csvPreamble.js";
 import { beforeAll, describe, expect, it } from "vitest";
 import { casePlan, type PlanCase } from "../../../src/analysis/casePlan.js";
 import { planProgramme, type PlanResult } from "../../../src/analysis/planProgramme.js";
@@ -197,6 +198,10 @@ describe("reportHtml: cautions, warnings, export", () => {
     const html = reportHtml(base);
     for (const caution of CAUTIONS) expect(html).toContain(caution.replace(/'/g, "&#39;"));
     expect(html).toContain("a &lt;b&gt;warning&lt;/b&gt;");
-    expect(html).toMatch(/href="data:text\/csv;charset=utf-8,site_id%2Csite_name/);
+    const link = /href="data:text\/csv;charset=utf-8,([^"]*)"/.exec(html);
+    expect(link).not.toBeNull();
+    const csv = decodeURIComponent(link![1]!).split("\r\n");
+    expect(csv[0]).toContain("# averta | plan of scenario");
+    expect(csv[CSV_PREAMBLE_LINES]).toMatch(/^site_id,site_name,/);
   });
 });

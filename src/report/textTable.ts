@@ -2,7 +2,7 @@
 export interface TableColumn {
   readonly heading: string;
   readonly align?: "left" | "right";
-  /** Wrap the column's text at this many characters (at spaces where it can); no limit when absent. */
+  /** Wrap the column's text, and its heading, at this many characters (at spaces where it can); no limit when absent. */
   readonly maxWidth?: number;
 }
 
@@ -30,7 +30,9 @@ export function textTable(columns: readonly TableColumn[], rows: readonly TableR
   const cellsOf = (row: TableRow): readonly string[] => (isSpan(row) ? row.cells : row);
   const firstColumn = (row: TableRow) => (isSpan(row) ? row.span : 0);
   // Column widths: the widest heading word or cell, no wider than maxWidth (wrapping keeps lines within it).
-  const widths = columns.map((column) => Math.min(widest(column.heading.split("\n")), column.maxWidth ?? Infinity));
+  // A heading is printed whole, unless its column has a maxWidth: then it wraps to the width its
+  // cells need, but never below its longest word.
+  const widths = columns.map((column) => (column.maxWidth === undefined ? widest(column.heading.split("\n")) : Math.min(widest(column.heading.split(/[\n ]/)), column.maxWidth)));
   const measured = rows.map((row) => cellsOf(row).map(displayWidth));
   rows.forEach((row, r) => {
     const first = firstColumn(row);
@@ -48,7 +50,6 @@ export function textTable(columns: readonly TableColumn[], rows: readonly TableR
     if (need > room) widths[row.span - 1]! += need - room;
   }
 
-  const aligns = columns.map((column) => column.align ?? "left");
   const boundary = (row: TableRow | undefined, column: number) => row === undefined || !isSpan(row) || column >= row.span;
   const junction = (up: boolean, down: boolean) => (up && down ? "┼" : up ? "┴" : down ? "┬" : "─");
   const rule = (left: string, right: string, above: TableRow | undefined | null, below: TableRow | undefined | null) => {
@@ -62,7 +63,8 @@ export function textTable(columns: readonly TableColumn[], rows: readonly TableR
   const fullRule = rule("├", "┤", undefined, undefined);
 
   const out: string[] = [rule("┌", "┐", null, undefined)];
-  pushRow(out, columns.map((column) => column.heading), columns.map((column) => displayWidth(column.heading)), widths, columns.map(() => "left"));
+  const aligns = columns.map((column) => column.align ?? "left");
+  pushRow(out, columns.map((column) => column.heading), columns.map((column) => displayWidth(column.heading)), widths, aligns);
   rows.forEach((row, r) => {
     const above = r === 0 ? undefined : rows[r - 1]!;
     out.push(!isSpan(row) && (above === undefined || !isSpan(above)) ? fullRule : rule("├", "┤", above, row));

@@ -1,5 +1,5 @@
-import { readFileSync, statSync } from "node:fs";
 import { isAlias, isCollection, isMap, isPair, isScalar, LineCounter, parseDocument, visit, type Document, type Node } from "yaml";
+import { readInputBytes } from "./readInputBytes.js";
 import { InputError, type InputProblem } from "./InputError.js";
 
 /** Largest input file we read: a programme of 100,000 sites fits well below it. */
@@ -110,35 +110,7 @@ function firstAliasOffset(doc: Document): number {
 }
 
 function readUtf8(file: string, label: string): string {
-  let bytes: Buffer;
-  try {
-    const stats = statSync(file);
-    if (stats.isDirectory()) {
-      throw new InputError([{ code: "not-a-file", file: label, message: "is a folder, not a file", hint: "name a file inside it" }]);
-    }
-    if (stats.size > MAX_INPUT_BYTES) {
-      throw new InputError([
-        {
-          code: "too-large",
-          file: label,
-          message: `is ${(stats.size / 1048576).toFixed(1)} MiB, over the ${MAX_INPUT_BYTES / 1048576} MiB limit`,
-          hint: "split the sites across scenarios or check that this is the right file",
-        },
-      ]);
-    }
-    bytes = readFileSync(file);
-  } catch (error) {
-    if (error instanceof InputError) throw error;
-    const code = (error as NodeJS.ErrnoException).code;
-    throw new InputError([
-      {
-        code: "missing-file",
-        file: label,
-        message: code === "ENOENT" ? "file not found" : `cannot be read (${code ?? "unknown error"})`,
-        hint: code === "ENOENT" ? "check the spelling and the folder you run averta from" : "check its permissions",
-      },
-    ]);
-  }
+  const bytes = readInputBytes(file, label, MAX_INPUT_BYTES, "split the sites across scenarios or check that this is the right file");
   try {
     return new TextDecoder("utf-8", { fatal: true }).decode(bytes).replace(/^\uFEFF/, "");
   } catch {

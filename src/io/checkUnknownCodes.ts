@@ -31,7 +31,7 @@ export function checkUnknownCodes(rows: CrashRows, label: string): string[] {
       code: "unknown-codes",
       file: label,
       line: Math.min(...codes.map((code) => code.firstLine)),
-      message: `${codes.reduce((sum, code) => sum + code.rows, 0)} rows have a ${field} code the mapping does not translate: ${listCodes(codes)}; in all ${affected} of ${rows.rowsRead} rows (${percent}%) have an unknown code, over the ${100 * MAX_UNKNOWN_CODE_SHARE}% limit`,
+      message: `${codes.reduce((sum, code) => sum + code.rows, 0)} rows have a ${field} code the mapping does not translate: ${listCodes(codes)}; all told ${affected} of ${rows.rowsRead} rows (${percent}%) have an unknown code, over the ${100 * MAX_UNKNOWN_CODE_SHARE}% limit`,
       hint: mappingHint(field, codes),
     }));
     throw new InputError(problems);

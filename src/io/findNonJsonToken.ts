@@ -12,7 +12,7 @@ const JSON_LITERALS = new Set(["true", "false", "null"]);
 /**
  * The first unquoted token of `text` that is not a JSON number or literal (RFC 8259): such as
  * 0x1F, 0o17, 012, +5, .5, 1., Infinity, NaN, .inf or a bare word, which a YAML reader would
- * quietly turn into numbers or text. Line and column are 1-based, lines ending at LF. Undefined
+ * quietly turn into numbers or text. Line and column are 1-based; each LF, CRLF or lone CR ends a line. Undefined
  * when every token is JSON. Cost O(n).
  */
 export function findNonJsonToken(text: string): NonJsonToken | undefined {
@@ -20,7 +20,7 @@ export function findNonJsonToken(text: string): NonJsonToken | undefined {
   let lineStart = 0;
   for (let i = 0; i < text.length; i++) {
     const c = text[i]!;
-    if (c === "\n") {
+    if (c === "\n" || (c === "\r" && text[i + 1] !== "\n")) {
       line++;
       lineStart = i + 1;
     } else if (c === '"') {

@@ -88,3 +88,21 @@ describe("readSitesGeojson takes JSON numbers only", () => {
     expect(sites[0]!.name).toBe('0x1F " Main');
   });
 });
+
+describe("site maps and mappings with CR or mixed line ends", () => {
+  it("reads a GeoJSON whose lines end in CR, CRLF or LF alike, and locates problems on the editor's line", () => {
+    const lines = ["{", '  "type": "FeatureCollection",', '  "features": [', '    { "type": "Feature", "properties": { "id": "I-1", "district": "N" }, "geometry": { "type": "Point", "coordinates": [10.4,', "      55.4] } },", '    { "type": "Feature", "properties": { "id": "I-2" }, "geometry": { "type": "Point", "coordinates": [10.5, 55.5] } }', "  ]", "}"];
+    for (const end of ["\n", "\r\n", "\r"]) {
+      const problems = problemsOf(() => readSitesGeojson(write("cr.geojson", lines.join(end))));
+      expect(problems.map((p) => [p.code, p.line, p.path])).toEqual([["geojson", 6, "features[1].properties.district"]]);
+      const fixed = lines.map((line) => line.replace('{ "id": "I-2" }', '{ "id": "I-2", "district": "S" }'));
+      expect(readSitesGeojson(write("cr-ok.geojson", fixed.join(end))).map((site) => site.paths[0]![0])).toEqual([{ lon: 10.4, lat: 55.4 }, { lon: 10.5, lat: 55.5 }]);
+      const hex = fixed.map((line) => line.replace("[10.5, 55.5]", "[0x1F, 55.5]"));
+      expect(problemsOf(() => readSitesGeojson(write("cr-hex.geojson", hex.join(end))))[0]).toMatchObject({ line: 6 });
+    }
+  });
+  it("reads a mapping with CR line ends and points at the right line", () => {
+    const problems = problemsOf(() => readCrashMapping(write("cr.yaml", "columns:\r  latitude: LAT\rseverity:\r  '9': X\r")));
+    expect(problems.map((p) => [p.code, p.line])).toEqual([["mapping", 4]]);
+  });
+});

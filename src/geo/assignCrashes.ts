@@ -1,5 +1,6 @@
 import type { GeoPoint } from "../model/types.js";
-import { buildSiteIndex, DEFAULT_GRID_LIMITS, metresPerDegree, type GridLimits, type SiteIndex } from "./buildSiteIndex.js";
+import { buildSiteIndex, DEFAULT_GRID_LIMITS, type GridLimits, type SiteIndex } from "./buildSiteIndex.js";
+import { metresPerDegree } from "./metresPerDegree.js";
 import { distanceToEdgeM } from "./distanceToEdgeM.js";
 import type { NetworkSite } from "./NetworkSite.js";
 

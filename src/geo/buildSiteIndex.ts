@@ -1,4 +1,5 @@
 import { WGS84_A_M, WGS84_F } from "./geodesicDistanceM.js";
+import { metresPerDegree } from "./metresPerDegree.js";
 import type { NetworkSite } from "./NetworkSite.js";
 import { wrapLongitude } from "./wrapLongitude.js";
 
@@ -146,13 +147,6 @@ export function buildSiteIndex(sites: readonly NetworkSite[], reachM: number, li
       extent: [minLon, minLat, maxLon, maxLat],
     };
   }
-}
-
-/** The WGS84 scales at a latitude, metres per degree of longitude and of latitude. */
-export function metresPerDegree(lat: number): { readonly lon: number; readonly lat: number } {
-  const phi = lat * RADIANS;
-  const w = 1 - E2 * Math.sin(phi) ** 2;
-  return { lon: (WGS84_A_M / Math.sqrt(w)) * Math.cos(phi) * RADIANS, lat: ((WGS84_A_M * (1 - E2)) / w ** 1.5) * RADIANS };
 }
 
 /**

@@ -1,6 +1,6 @@
 import { expect } from "vitest";
 import type { CrashAssignments } from "../../src/geo/assignCrashes.js";
-import { metresPerDegree } from "../../src/geo/buildSiteIndex.js";
+import { metresPerDegree } from "../../src/geo/metresPerDegree.js";
 import { distanceToEdgeM } from "../../src/geo/distanceToEdgeM.js";
 import type { NetworkSite } from "../../src/geo/NetworkSite.js";
 import type { GeoPoint } from "../../src/model/types.js";

@@ -25,22 +25,30 @@ export function checkUnknownCodes(rows: CrashRows, label: string): string[] {
   const affected = rows.unknownCodes.reduce((sum, code) => sum + code.rows, 0);
   const share = affected / rows.rowsRead;
   const percent = (100 * share).toFixed(1);
-  const byField = (["severity", "type"] as const).map((field) => ({ field, codes: rows.unknownCodes.filter((code) => code.field === field) })).filter((entry) => entry.codes.length > 0);
+  const byField = (["severity", "type"] as const).map((field) => {
+      const codes = rows.unknownCodes.filter((code) => code.field === field);
+      return { field, codes, count: codes.reduce((sum, code) => sum + code.rows, 0) };
+    })
+    .filter((entry) => entry.codes.length > 0);
   if (share > MAX_UNKNOWN_CODE_SHARE) {
-    const problems: InputProblem[] = byField.map(({ field, codes }) => ({
+    const problems: InputProblem[] = byField.map(({ field, codes, count }) => ({
       code: "unknown-codes",
       file: label,
       line: Math.min(...codes.map((code) => code.firstLine)),
-      message: `${codes.reduce((sum, code) => sum + code.rows, 0)} rows have a ${field} code the mapping does not translate: ${listCodes(codes)}; all told ${affected} of ${rows.rowsRead} rows (${percent}%) have an unknown code, over the ${100 * MAX_UNKNOWN_CODE_SHARE}% limit`,
+      message: `${rowsOf(count)} ${count === 1 ? "has" : "have"} a ${field} code the mapping does not translate: ${listCodes(codes)}; all told ${affected} of ${rows.rowsRead} rows (${percent}%) have an unknown code, over the ${100 * MAX_UNKNOWN_CODE_SHARE}% limit`,
       hint: mappingHint(field, codes),
     }));
     throw new InputError(problems);
   }
-  return byField.map(({ field, codes }) => `warning: ${label}: ${codes.reduce((sum, code) => sum + code.rows, 0)} rows rejected for an unknown ${field} code: ${listCodes(codes)} (${percent}% of rows have an unknown code; above ${100 * MAX_UNKNOWN_CODE_SHARE}% tally stops). ${capitalise(mappingHint(field, codes))}`);
+  return byField.map(({ field, codes, count }) => `warning: ${label}: ${rowsOf(count)} rejected for an unknown ${field} code: ${listCodes(codes)} (${percent}% of rows have an unknown code; above ${100 * MAX_UNKNOWN_CODE_SHARE}% tally stops). ${capitalise(mappingHint(field, codes))}`);
+}
+
+function rowsOf(count: number): string {
+  return `${count} row${count === 1 ? "" : "s"}`;
 }
 
 function listCodes(codes: readonly UnknownCode[]): string {
-  const shown = codes.slice(0, CODES_LISTED).map((code) => `${code.code === "" ? "(empty)" : quoteValue(code.code)} in ${code.rows} row${code.rows === 1 ? "" : "s"} (first on line ${code.firstLine})`);
+  const shown = codes.slice(0, CODES_LISTED).map((code) => `${code.code === "" ? "(empty)" : quoteValue(code.code)} in ${rowsOf(code.rows)} (first on line ${code.firstLine})`);
   return shown.join(", ") + (codes.length > CODES_LISTED ? `, and ${codes.length - CODES_LISTED} more codes` : "");
 }
 

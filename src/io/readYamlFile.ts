@@ -31,7 +31,10 @@ export function readYamlFile(file: string, label: string = file): YamlSource {
  * Parses YAML text already in memory (e.g. a scenario a command is about to write) with the same
  * checks and positions as readYamlFile; `label` names it in messages.
  */
-export function parseYamlText(text: string, label: string): YamlSource {
+export function parseYamlText(source: string, label: string): YamlSource {
+  // A lone CR ends a line (YAML 1.2, section 5.4; JSON white space), but the parser would keep it
+  // as text: one character for another, so every offset, line and column stays right.
+  const text = source.replace(/\r(?!\n)/g, "\n");
   const lineCounter = new LineCounter();
   const doc = parseDocument(text, { lineCounter, uniqueKeys: true, prettyErrors: false, strict: true });
   const problems: InputProblem[] = doc.errors.map((error) => {

@@ -1,6 +1,7 @@
 import { isAlias, isCollection, isMap, isPair, isScalar, LineCounter, parseDocument, visit, type Document, type Node } from "yaml";
 import { readInputBytes } from "./readInputBytes.js";
 import { InputError, type InputProblem } from "./InputError.js";
+import { quoteValue } from "./quoteValue.js";
 
 /** Largest input file we read: a programme of 100,000 sites fits well below it. */
 export const MAX_INPUT_BYTES = 64 * 1024 * 1024;
@@ -59,6 +60,21 @@ export function parseYamlText(source: string, label: string): YamlSource {
     throw new InputError([{ code: "too-deep", file: label, line, column: col, message: `lists and mappings are nested more than ${MAX_NESTING_DEPTH} levels deep`, hint: TOO_DEEP_HINT }]);
   }
 
+  const based = firstNonDecimalNumber(doc);
+  if (based !== undefined) {
+    const { line, col } = lineCounter.linePos(based.offset);
+    throw new InputError([
+      {
+        code: "not-decimal",
+        file: label,
+        line,
+        column: col,
+        message: `a number written in base ${based.base} (${quoteValue(text.slice(based.offset, based.end))})`,
+        hint: "write numbers in decimal, e.g. 31 rather than 0x1F; quote the value if it is text",
+      },
+    ]);
+  }
+
   let data: unknown;
   try {
     data = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
@@ -99,6 +115,21 @@ function firstTooDeepNode(doc: Document): number | undefined {
     }
   }
   return undefined;
+}
+
+// YAML reads 0x1F, 0o17 and 0b101 as numbers; a scenario's numbers are money, rates and counts,
+// where such a form is almost surely a mistake, so the first one is refused at its place.
+function firstNonDecimalNumber(doc: Document): { offset: number; end: number; base: number } | undefined {
+  const bases: Readonly<Record<string, number>> = { HEX: 16, OCT: 8, BIN: 2 };
+  let found: { offset: number; end: number; base: number } | undefined;
+  visit(doc, {
+    Scalar(_key, node) {
+      if (typeof node.value !== "number" || node.format === undefined || !Object.hasOwn(bases, node.format)) return undefined;
+      found = { offset: node.range?.[0] ?? 0, end: node.range?.[1] ?? 0, base: bases[node.format]! };
+      return visit.BREAK;
+    },
+  });
+  return found;
 }
 
 function firstAliasOffset(doc: Document): number {

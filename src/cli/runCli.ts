@@ -1,6 +1,9 @@
 import { Command, CommanderError } from "commander";
+import { allowOutsideFiles } from "../io/allowedInputPath.js";
 import { InputError, formatProblem } from "../io/InputError.js";
+import { forgetRunInputs } from "../io/runInputs.js";
 import type { CliIo } from "./CliIo.js";
+import { terminalSafeText } from "./terminalSafeText.js";
 import { registerCheckCommand } from "./commands/checkCommand.js";
 import { registerCompareCommand } from "./commands/compareCommand.js";
 import { registerFrontierCommand } from "./commands/frontierCommand.js";
@@ -21,6 +24,7 @@ export function createProgram(io: CliIo): Command {
   const program = new Command("averta")
     .description("Choose the road-safety capital list that avoids the most K+A crashes (KSI crashes: a fatality or a serious injury; crashes, not people) within budget.")
     .version("0.1.0")
+    .option("--allow-outside-files", "let a scenario's relative paths (catalogues, sites file) reach files outside its folder and the catalogs folders above it")
     .showHelpAfterError("(run with --help for usage)")
     .configureOutput({ writeOut: io.stdout, writeErr: io.stderr })
     .exitOverride();
@@ -34,6 +38,7 @@ export function createProgram(io: CliIo): Command {
   registerInitCommand(program, io);
   registerScreenCommand(program, io);
   for (const command of program.commands) command.exitOverride().configureOutput({ writeOut: io.stdout, writeErr: io.stderr });
+  program.hook("preAction", (_program, action) => allowOutsideFiles(action.optsWithGlobals<{ allowOutsideFiles?: boolean }>().allowOutsideFiles === true));
   return program;
 }
 
@@ -42,8 +47,18 @@ export function createProgram(io: CliIo): Command {
  * The only place that turns errors into messages: bad input prints located problems, a fault
  * prints one line (the stack only with AVERTA_DEBUG=1).
  */
-export async function runCli(argv: readonly string[], io: CliIo): Promise<number> {
+export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<number> {
+  // Everything printed goes through one filter, so no id, name or message can drive the terminal.
+  // A progress redraw starts with a carriage return of our own, which is kept.
+  const io: CliIo = {
+    stdout: (text) => rawIo.stdout(terminalSafeText(text)),
+    stderr: (text) => rawIo.stderr(text.startsWith("\r") ? `\r${terminalSafeText(text.slice(1))}` : terminalSafeText(text)),
+    stderrIsTty: rawIo.stderrIsTty,
+  };
   const program = createProgram(io);
+  // Each run starts with no inputs read and the default path policy (tests run many in one process).
+  forgetRunInputs();
+  allowOutsideFiles(false);
   try {
     await program.parseAsync([...argv], { from: "user" });
     return EXIT_OK;

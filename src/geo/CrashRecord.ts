@@ -40,3 +40,11 @@ export interface RejectedRow {
   readonly reason: RejectReason;
   readonly message: string;
 }
+
+/** A severity or crash-type code that the mapping does not translate, the rows rejected for it and its first line. */
+export interface UnknownCode {
+  readonly field: "severity" | "type";
+  readonly code: string;
+  readonly rows: number;
+  readonly firstLine: number;
+}

@@ -1,5 +1,5 @@
 import type { GeoPoint } from "../model/types.js";
-import { WGS84_A_M, WGS84_F } from "./geodesicDistanceM.js";
+import { metresPerDegree } from "./metresPerDegree.js";
 
 /** A local flat plane in metres about a centre point: east is x, north is y. */
 export interface LocalPlane {
@@ -18,13 +18,8 @@ export interface LocalPlane {
  * GeographicLib. Not for networks spanning more than a few tens of km.
  */
 export function localPlane(centre: GeoPoint): LocalPlane {
-  const e2 = WGS84_F * (2 - WGS84_F);
-  const phi = (centre.lat * Math.PI) / 180;
-  const w = 1 - e2 * Math.sin(phi) ** 2;
-  const meridianM = (WGS84_A_M * (1 - e2)) / w ** 1.5;
-  const primeVerticalM = WGS84_A_M / Math.sqrt(w);
-  const perRadian = Math.PI / 180;
-  return { centre, metresPerDegreeLon: primeVerticalM * Math.cos(phi) * perRadian, metresPerDegreeLat: meridianM * perRadian };
+  const scale = metresPerDegree(centre.lat);
+  return { centre, metresPerDegreeLon: scale.lon, metresPerDegreeLat: scale.lat };
 }
 
 /** Plane x (east) in metres of a longitude. */

@@ -1,7 +1,8 @@
 import { buildCrashMatrix } from "../model/crashMatrix.js";
 import { CRASH_TYPES, SEVERITIES, type CrashType, type Severity, type Site } from "../model/types.js";
 import { assignCrashes, type AssignOptions } from "./assignCrashes.js";
-import { REJECT_REASONS, type CrashRecord, type RejectedRow, type RejectReason } from "./CrashRecord.js";
+import { REJECT_REASONS, type CrashRecord, type RejectedRow, type RejectReason, type UnknownCode } from "./CrashRecord.js";
+import { inferCrashWindow, type WindowInference } from "./inferCrashWindow.js";
 import type { NetworkSite } from "./NetworkSite.js";
 import { polylineLengthKm } from "./polylineLengthKm.js";
 import { polylineMidpoint } from "./polylineMidpoint.js";
@@ -15,6 +16,10 @@ export interface CrashWindow {
 /** What happened to every crash row, for the data-quality report. */
 export interface CrashDataQuality {
   readonly window: CrashWindow;
+  /** How the window was taken from the data, when none was given. */
+  readonly windowInference?: WindowInference;
+  /** Untranslated severity and type codes (rows rejected for them), most rows first. */
+  readonly unknownCodes?: readonly UnknownCode[];
   readonly rowsRead: number;
   readonly assigned: number;
   readonly unassigned: number;
@@ -37,19 +42,24 @@ export interface TallyResult {
   readonly quality: CrashDataQuality;
 }
 
+/** Crash rows as a reader hands them over: records, rejected rows, and the codes it could not translate. */
+export interface TallyRows {
+  readonly rowsRead: number;
+  readonly records: readonly CrashRecord[];
+  readonly rejected: readonly RejectedRow[];
+  readonly unknownCodes?: readonly UnknownCode[];
+}
+
 /**
- * Counts crashes by site, severity and type: keeps the rows within `window` (all rows when it is
- * undefined: the window is then the years the records span), rejects repeated crash ids after
- * the first, assigns the rest to sites (assignCrashes) and tallies them. Every row ends up
- * assigned, unassigned or rejected, so assigned + unassigned + rejected = rows read.
+ * Counts crashes by site, severity and type: keeps the rows within `window` (when it is
+ * undefined, the window inferCrashWindow takes from the data: the latest run of full years, see
+ * there), rejects repeated crash ids after the first, assigns the rest to sites (assignCrashes)
+ * and tallies them. Every row ends up assigned, unassigned or rejected, so assigned + unassigned
+ * + rejected = rows read.
  */
-export function tallyNetwork(
-  sites: readonly NetworkSite[],
-  rows: { readonly rowsRead: number; readonly records: readonly CrashRecord[]; readonly rejected: readonly RejectedRow[] },
-  window: CrashWindow | undefined,
-  options: Partial<AssignOptions> = {},
-): TallyResult {
-  const span: CrashWindow = window ?? yearsSpanned(rows.records);
+export function tallyNetwork(sites: readonly NetworkSite[], rows: TallyRows, window: CrashWindow | undefined, options: Partial<AssignOptions> = {}): TallyResult {
+  const windowInference = window === undefined ? inferCrashWindow(rows.records) : undefined;
+  const span: CrashWindow = window ?? windowInference?.window ?? { firstYear: 0, lastYear: 0 };
   const rejected: RejectedRow[] = [...rows.rejected];
   const kept: CrashRecord[] = [];
   const firstLineOfId = new Map<string, number>();
@@ -102,6 +112,8 @@ export function tallyNetwork(
     sites: sites.map((site, index) => toScenarioSite(site, (type, severity) => counts[index * cellsPerSite + cellOf(type, severity)]!)),
     quality: {
       window: span,
+      ...(windowInference !== undefined && { windowInference }),
+      ...(rows.unknownCodes !== undefined && rows.unknownCodes.length > 0 && { unknownCodes: rows.unknownCodes }),
       rowsRead: rows.rowsRead,
       assigned,
       unassigned: kept.length - assigned,
@@ -133,16 +145,4 @@ function toScenarioSite(site: NetworkSite, count: (type: CrashType, severity: Se
     candidates: site.candidates,
     costOverrides: {},
   };
-}
-
-/** The years from the earliest to the latest record (a loop: spreading 500 000 years overflows the stack). */
-function yearsSpanned(records: readonly CrashRecord[]): CrashWindow {
-  if (records.length === 0) return { firstYear: 0, lastYear: 0 };
-  let firstYear = Infinity;
-  let lastYear = -Infinity;
-  for (const record of records) {
-    firstYear = Math.min(firstYear, record.year);
-    lastYear = Math.max(lastYear, record.year);
-  }
-  return { firstYear, lastYear };
 }

@@ -140,7 +140,7 @@ export function loadScenarioSource(source: YamlSource, file: string): LoadedScen
           {
             ...error.problems[0]!,
             ...at,
-            message: missing ? `catalogue '${path}' was not found (looked in ${resolved})` : `catalogue '${path}' is a folder, not a file`,
+            message: missing ? `catalogue '${path}' was not found (looked in ${resolved})` : `catalogue '${path}' ${error.problems[0]!.message}`,
             hint: missing ? "catalogue paths are relative to the scenario file" : "name the catalogue's .yaml file",
           },
         ]);
@@ -225,7 +225,7 @@ function calibrate(
 ): { catalogue: Catalogue; calibrations: SpfCalibration[] } {
   const calibrations: SpfCalibration[] = [];
   const performanceFunctions = catalogue.performanceFunctions.map((spf): SafetyPerformanceFunction => {
-    const asked = requested[spf.id];
+    const asked = Object.hasOwn(requested, spf.id) ? requested[spf.id] : undefined;
     if (asked === undefined) return spf;
     if (asked !== "estimate") {
       calibrations.push({ performanceFunction: spf.id, factor: asked, method: "given" });

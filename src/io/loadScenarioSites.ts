@@ -117,7 +117,7 @@ function readSitesFile(scenarioFile: string, path: string, at: Omit<InputProblem
         {
           ...error.problems[0]!,
           ...at,
-          message: missing ? `sites file '${path}' was not found (looked in ${resolved})` : `sites file '${path}' is a folder, not a file`,
+          message: missing ? `sites file '${path}' was not found (looked in ${resolved})` : `sites file '${path}' ${error.problems[0]!.message}`,
           hint: missing ? "the sites path is relative to the scenario file; averta tally --out writes one" : "name the sites .yaml file",
         },
       ]);

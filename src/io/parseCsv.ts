@@ -16,15 +16,22 @@ export type CsvParseResult =
   | { readonly ok: true; readonly records: readonly CsvRecord[] }
   | { readonly ok: false; readonly problem: CsvSyntaxProblem };
 
+/** Field separators a crash file may use: comma (RFC 4180), semicolon, tab. */
+export type CsvDelimiter = "," | ";" | "\t";
+export const CSV_DELIMITERS: readonly CsvDelimiter[] = [",", ";", "\t"];
+
 /**
  * Parses CSV text by RFC 4180 ("Common Format and MIME Type for CSV Files", section 2):
- * fields separated by commas, records by CRLF (a lone LF or CR is accepted too), fields in
- * double quotes may hold commas, line breaks and doubled quotes (""). A leading UTF-8 byte
- * order mark is skipped; a final line break does not start an empty record; blank lines are
- * skipped. Cost O(n) in the text's length.
+ * fields separated by commas (or `delimiter`), records by CRLF (a lone LF or CR, and a mix of
+ * the three, is accepted too; each CRLF, LF or CR is one line end), fields in double quotes may
+ * hold delimiters, line breaks and doubled quotes (""). A leading UTF-8 byte order mark is
+ * skipped; a final line break does not start an empty record; blank lines are skipped. Each
+ * record carries the line it starts on, counting the line breaks inside quoted fields.
+ * Cost O(n) in the text's length.
  * @example parseCsv('a,"b,""c"""\r\n') → records [{ line: 1, fields: ["a", 'b,"c"'] }]
  */
-export function parseCsv(text: string): CsvParseResult {
+export function parseCsv(text: string, delimiter: CsvDelimiter = ","): CsvParseResult {
+  const separator = delimiter.charCodeAt(0);
   const records: CsvRecord[] = [];
   let position = text.charCodeAt(0) === 0xfeff ? 1 : 0;
   let line = 1;
@@ -66,14 +73,14 @@ export function parseCsv(text: string): CsvParseResult {
         }
         value = parts;
         const next = text[position];
-        if (next !== undefined && next !== "," && next !== "\r" && next !== "\n") {
+        if (next !== undefined && next !== delimiter && next !== "\r" && next !== "\n") {
           return { ok: false, problem: { line, column: position - lineStart + 1, message: "text follows a closing quote" } };
         }
       } else {
         let end = position;
         while (end < length) {
           const c = text.charCodeAt(end);
-          if (c === 44 || c === 10 || c === 13) break;
+          if (c === separator || c === 10 || c === 13) break;
           if (c === 34) return { ok: false, problem: { line, column: end - lineStart + 1, message: "a double quote inside an unquoted field" } };
           end++;
         }
@@ -81,7 +88,7 @@ export function parseCsv(text: string): CsvParseResult {
         position = end;
       }
       fields.push(value);
-      if (text[position] === ",") {
+      if (text[position] === delimiter) {
         position++;
         continue;
       }

@@ -1,6 +1,9 @@
+import { readFileSync } from "node:fs";
 import type { NetworkSite } from "../geo/NetworkSite.js";
 import { AREA_TYPES, SITE_KINDS, type AreaType, type GeoPoint, type SiteKind } from "../model/types.js";
 import { formatFieldPath } from "./fieldPath.js";
+import { findNonJsonToken } from "./findNonJsonToken.js";
+import { quoteValue } from "./quoteValue.js";
 import { InputError, type InputProblem } from "./InputError.js";
 import { readYamlFile, type PathSegment } from "./readYamlFile.js";
 
@@ -11,10 +14,17 @@ const ID_PATTERN = /^[A-Za-z0-9][A-Za-z0-9._-]*$/;
  * intersection, a LineString or MultiLineString a segment (or, with kind: corridor, a corridor).
  * Properties: id (required), name, kind, district (required), tags, area (urban | rural), aadt, performanceFunction,
  * candidates (treatment ids for the scenario). Coordinates are [longitude, latitude] in WGS84.
- * Every problem is reported with its line and field path; throws InputError.
+ * The file must be JSON (RFC 7946 builds on RFC 8259): a number such as 0x1F, 0o17 or .inf,
+ * which a YAML reader would quietly accept, is refused at its line. Every problem is reported
+ * with its line and field path; throws InputError.
  */
 export function readSitesGeojson(file: string): NetworkSite[] {
   const source = readYamlFile(file);
+  // The YAML read has already checked the file exists, fits and is UTF-8.
+  const stray = findNonJsonToken(readFileSync(file, "utf8"));
+  if (stray !== undefined) {
+    throw new InputError([{ code: "geojson", file: source.file, line: stray.line, column: stray.column, message: `${quoteValue(stray.token)} is not JSON: GeoJSON numbers are decimal (such as 10.4 or -3.5e-2) and text is in double quotes`, hint: "write coordinates and numbers in decimal digits, e.g. [10.4012, 55.3977], and quote every name" }]);
+  }
   const problems: InputProblem[] = [];
   const problem = (path: PathSegment[], message: string, hint: string) =>
     problems.push({ code: "geojson", file: source.file, ...source.positionOf(path), path: formatFieldPath(path), message, hint });

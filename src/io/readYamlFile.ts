@@ -1,6 +1,7 @@
-import { readFileSync, statSync } from "node:fs";
 import { isAlias, isCollection, isMap, isPair, isScalar, LineCounter, parseDocument, visit, type Document, type Node } from "yaml";
+import { readInputBytes } from "./readInputBytes.js";
 import { InputError, type InputProblem } from "./InputError.js";
+import { quoteValue } from "./quoteValue.js";
 
 /** Largest input file we read: a programme of 100,000 sites fits well below it. */
 export const MAX_INPUT_BYTES = 64 * 1024 * 1024;
@@ -31,7 +32,10 @@ export function readYamlFile(file: string, label: string = file): YamlSource {
  * Parses YAML text already in memory (e.g. a scenario a command is about to write) with the same
  * checks and positions as readYamlFile; `label` names it in messages.
  */
-export function parseYamlText(text: string, label: string): YamlSource {
+export function parseYamlText(source: string, label: string): YamlSource {
+  // A lone CR ends a line (YAML 1.2, section 5.4; JSON white space), but the parser would keep it
+  // as text: one character for another, so every offset, line and column stays right.
+  const text = source.replace(/\r(?!\n)/g, "\n");
   const lineCounter = new LineCounter();
   const doc = parseDocument(text, { lineCounter, uniqueKeys: true, prettyErrors: false, strict: true });
   const problems: InputProblem[] = doc.errors.map((error) => {
@@ -54,6 +58,21 @@ export function parseYamlText(text: string, label: string): YamlSource {
   if (deep !== undefined) {
     const { line, col } = lineCounter.linePos(deep);
     throw new InputError([{ code: "too-deep", file: label, line, column: col, message: `lists and mappings are nested more than ${MAX_NESTING_DEPTH} levels deep`, hint: TOO_DEEP_HINT }]);
+  }
+
+  const based = firstNonDecimalNumber(doc);
+  if (based !== undefined) {
+    const { line, col } = lineCounter.linePos(based.offset);
+    throw new InputError([
+      {
+        code: "not-decimal",
+        file: label,
+        line,
+        column: col,
+        message: `a number written in base ${based.base} (${quoteValue(text.slice(based.offset, based.end))})`,
+        hint: "write numbers in decimal, e.g. 31 rather than 0x1F; quote the value if it is text",
+      },
+    ]);
   }
 
   let data: unknown;
@@ -98,6 +117,21 @@ function firstTooDeepNode(doc: Document): number | undefined {
   return undefined;
 }
 
+// YAML reads 0x1F, 0o17 and 0b101 as numbers; a scenario's numbers are money, rates and counts,
+// where such a form is almost surely a mistake, so the first one is refused at its place.
+function firstNonDecimalNumber(doc: Document): { offset: number; end: number; base: number } | undefined {
+  const bases: Readonly<Record<string, number>> = { HEX: 16, OCT: 8, BIN: 2 };
+  let found: { offset: number; end: number; base: number } | undefined;
+  visit(doc, {
+    Scalar(_key, node) {
+      if (typeof node.value !== "number" || node.format === undefined || !Object.hasOwn(bases, node.format)) return undefined;
+      found = { offset: node.range?.[0] ?? 0, end: node.range?.[1] ?? 0, base: bases[node.format]! };
+      return visit.BREAK;
+    },
+  });
+  return found;
+}
+
 function firstAliasOffset(doc: Document): number {
   let offset = 0;
   visit(doc, {
@@ -110,35 +144,7 @@ function firstAliasOffset(doc: Document): number {
 }
 
 function readUtf8(file: string, label: string): string {
-  let bytes: Buffer;
-  try {
-    const stats = statSync(file);
-    if (stats.isDirectory()) {
-      throw new InputError([{ code: "not-a-file", file: label, message: "is a folder, not a file", hint: "name a file inside it" }]);
-    }
-    if (stats.size > MAX_INPUT_BYTES) {
-      throw new InputError([
-        {
-          code: "too-large",
-          file: label,
-          message: `is ${(stats.size / 1048576).toFixed(1)} MiB, over the ${MAX_INPUT_BYTES / 1048576} MiB limit`,
-          hint: "split the sites across scenarios or check that this is the right file",
-        },
-      ]);
-    }
-    bytes = readFileSync(file);
-  } catch (error) {
-    if (error instanceof InputError) throw error;
-    const code = (error as NodeJS.ErrnoException).code;
-    throw new InputError([
-      {
-        code: "missing-file",
-        file: label,
-        message: code === "ENOENT" ? "file not found" : `cannot be read (${code ?? "unknown error"})`,
-        hint: code === "ENOENT" ? "check the spelling and the folder you run averta from" : "check its permissions",
-      },
-    ]);
-  }
+  const bytes = readInputBytes(file, label, MAX_INPUT_BYTES, "split the sites across scenarios or check that this is the right file");
   try {
     return new TextDecoder("utf-8", { fatal: true }).decode(bytes).replace(/^\uFEFF/, "");
   } catch {

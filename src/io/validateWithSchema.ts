@@ -6,6 +6,7 @@ import { formatFieldPath, parseJsonPointer } from "./fieldPath.js";
 import type { InputProblem } from "./InputError.js";
 import { packageRoot } from "./packageRoot.js";
 import type { YamlSource } from "./readYamlFile.js";
+import { quoteValue } from "./quoteValue.js";
 
 export type SchemaName = "scenario" | "catalogue" | "sites";
 const SCHEMA_NAMES: readonly SchemaName[] = ["scenario", "catalogue", "sites"];
@@ -68,7 +69,7 @@ function describe(error: ErrorObject, source: YamlSource): InputProblem {
       return {
         ...base,
         ...at([...path, field], true),
-        message: `unknown field '${field}'`,
+        message: `unknown field ${quoteValue(field)}`,
         hint: guess ? `did you mean '${guess}'?` : `allowed fields: ${allowed.join(", ")}`,
       };
     }
@@ -79,7 +80,7 @@ function describe(error: ErrorObject, source: YamlSource): InputProblem {
       return {
         ...base,
         ...at(path),
-        message: `'${value}' is not allowed`,
+        message: `${quoteValue(value)} is not allowed`,
         hint: guess ? `did you mean '${guess}'? (one of: ${allowed.join(", ")})` : `use one of: ${allowed.join(", ")}`,
       };
     }
@@ -91,7 +92,7 @@ function describe(error: ErrorObject, source: YamlSource): InputProblem {
         hint: description ?? `write ${article(String(params.type))} here`,
       };
     case "pattern":
-      return { ...base, ...at(path), message: `'${String(valueAt(source.data, path))}' has the wrong form`, hint: description ?? `it must match ${String(params.pattern)}` };
+      return { ...base, ...at(path), message: `${quoteValue(String(valueAt(source.data, path)))} has the wrong form`, hint: description ?? `it must match ${String(params.pattern)}` };
     case "minimum":
     case "maximum":
     case "exclusiveMinimum":

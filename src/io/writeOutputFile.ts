@@ -1,61 +1,150 @@
-import { closeSync, existsSync, fsyncSync, openSync, renameSync, rmSync, statSync, writeSync } from "node:fs";
-import { basename, dirname, join, resolve } from "node:path";
+import { closeSync, existsSync, fsyncSync, linkSync, lstatSync, openSync, readdirSync, renameSync, rmSync, statSync } from "node:fs";
+import { basename, dirname, join, resolve, sep } from "node:path";
+import { randomBytes } from "node:crypto";
 import { InputError } from "./InputError.js";
+import { runInputAt } from "./runInputs.js";
+import { writeAllSync } from "./writeAllSync.js";
+import { writeProblem } from "./writeProblems.js";
 
-/** Why a file could not be written, for the errors that lie with the folder or disk, not with averta. */
-const WRITE_PROBLEMS: Readonly<Record<string, string>> = {
-  EACCES: "permission denied",
-  EPERM: "permission denied",
-  EROFS: "the folder is on a read-only disk",
-  ENOSPC: "no space left on device",
-  EDQUOT: "the disk quota is used up",
-};
+/** Longest file name (one path component, in bytes) most file systems accept. */
+const MAX_NAME_BYTES = 255;
+
+// Temporaries sit beside the target (a rename across disks is not atomic) and are named
+// `.<name>.averta-<pid>-<random>.tmp`, so a later run can tell its own stale ones from the pid.
+const TEMPORARY = /^\..*\.averta-(\d+)-[0-9a-f]{8}\.tmp$/;
 
 /**
- * Writes `content` to `file` atomically: a temporary file in the same folder, flushed, then
- * renamed over the target, so a reader never sees half a file and an interrupted run leaves none.
- * An existing file is replaced only when `force` is set. `option` names the command-line option
- * that gave the path, for the messages.
+ * Writes `content` to `file` so that a reader never sees half a file and nothing of a failed
+ * write is left: a temporary file in the same folder, written to its end and fsync'd, then
+ * renamed over the target with `force`, or hard-linked to a name that must not exist yet
+ * without it (link fails if another run got there first, so of two runs exactly one wins).
+ * A run killed mid-write leaves its temporary; the next write into that folder removes the
+ * temporaries of processes that no longer run. Never replaces a folder, device, FIFO or socket,
+ * nor a file this run has read. `option` names the command-line option that gave the path.
  */
 export function writeOutputFile(file: string, content: string, force: boolean, option = "--out"): void {
   checkOutputTarget(file, force, option);
   const folder = dirname(file);
-  const temporary = join(folder, `.${basename(file)}.${process.pid}.${Date.now()}.tmp`);
+  removeStaleTemporaries(folder);
+  const temporary = join(folder, `.${basename(file).slice(0, 100)}.averta-${process.pid}-${randomBytes(4).toString("hex")}.tmp`);
   try {
     const descriptor = openSync(temporary, "wx");
     try {
-      writeSync(descriptor, content);
+      writeAllSync(descriptor, Buffer.from(content, "utf8"));
       fsyncSync(descriptor);
     } finally {
       closeSync(descriptor);
     }
-    renameSync(temporary, file);
+    if (force) renameSync(temporary, file);
+    else createWithoutReplacing(temporary, file, option);
+    syncFolder(folder);
   } catch (error) {
     rmSync(temporary, { force: true });
+    if (error instanceof InputError) throw error;
     const code = (error as NodeJS.ErrnoException).code;
-    const reason = code === undefined ? undefined : WRITE_PROBLEMS[code];
-    if (reason !== undefined) throw new InputError([{ code: "cannot-write", file, message: `cannot be written: ${reason} (${code})`, hint: `choose another ${option} path, or free the disk or fix the folder's permissions` }]);
-    throw error;
+    if (code === undefined) throw error;
+    throw new InputError([{ code: "cannot-write", file, message: `cannot be written: ${writeProblem(code)} (${code}); nothing was written`, hint: `choose another ${option} path, or free the disk or fix the folder's permissions` }]);
+  }
+}
+
+// Publishes the finished temporary under `file` only if no file has that name.
+function createWithoutReplacing(temporary: string, file: string, option: string): void {
+  try {
+    linkSync(temporary, file);
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    if (code === "EEXIST") throw existsError(file, option);
+    if (code !== "EPERM" && code !== "ENOTSUP" && code !== "EOPNOTSUPP" && code !== "ENOSYS") throw error;
+    // No hard links on this file system: claim the name by exclusive creation, then rename onto it.
+    try {
+      closeSync(openSync(file, "wx"));
+    } catch (claim) {
+      if ((claim as NodeJS.ErrnoException).code === "EEXIST") throw existsError(file, option);
+      throw claim;
+    }
+    renameSync(temporary, file);
+    return;
+  }
+  rmSync(temporary, { force: true });
+}
+
+function existsError(file: string, option: string): InputError {
+  return new InputError([{ code: "exists", file, message: "already exists and was left untouched", hint: `choose another ${option} path, or add --force to replace it` }]);
+}
+
+// Removes temporaries left by averta runs that were killed mid-write (their process is gone).
+function removeStaleTemporaries(folder: string): void {
+  let names: string[];
+  try {
+    names = readdirSync(folder);
+  } catch {
+    return;
+  }
+  for (const name of names) {
+    const match = TEMPORARY.exec(name);
+    if (match === null || processAlive(Number(match[1]))) continue;
+    rmSync(join(folder, name), { force: true });
+  }
+}
+
+function processAlive(pid: number): boolean {
+  if (pid === process.pid) return true;
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (error) {
+    return (error as NodeJS.ErrnoException).code === "EPERM";
+  }
+}
+
+// Makes the rename itself durable; some file systems cannot fsync a folder, which is harmless.
+function syncFolder(folder: string): void {
+  try {
+    const descriptor = openSync(folder, "r");
+    try {
+      fsyncSync(descriptor);
+    } finally {
+      closeSync(descriptor);
+    }
+  } catch {
+    // Best effort.
   }
 }
 
 /**
- * Throws the InputError writeOutputFile would for `file` (an empty name, a missing folder, a
- * folder in the way, an existing file without `force`), so a command checks its targets before
- * any long work, and a command writing several files checks them all before writing any.
- * `option` names the command-line option that gave the path.
+ * Throws the InputError writeOutputFile would for `file` (an empty or over-long name, a name
+ * ending in a slash, a missing folder, a folder, device, FIFO or socket in the way, an input of
+ * this run, an existing file without `force`), so a command checks its targets before any long
+ * work, and a command writing several files checks them all before writing any. `option` names
+ * the command-line option that gave the path.
  */
 export function checkOutputTarget(file: string, force: boolean, option = "--out"): void {
-  if (file.trim() === "") {
-    throw new InputError([{ code: "bad-option", file: option, message: "needs a file name, and got an empty one", hint: `give ${option} a file name, e.g. ${option} plan.txt` }]);
-  }
+  const refuse = (code: string, message: string, hint: string) => new InputError([{ code, file: file === "" ? option : file, message, hint }]);
+  if (file.trim() === "") throw refuse("bad-option", "needs a file name, and got an empty one", `give ${option} a file name, e.g. ${option} plan.txt`);
+  if (file.endsWith("/") || file.endsWith(sep)) throw refuse("not-a-file", "ends with a slash, so it names a folder, not a file", `give ${option} a file name, e.g. ${file}plan.txt`);
+  if (Buffer.byteLength(basename(file)) > MAX_NAME_BYTES) throw refuse("bad-option", `the file name is ${Buffer.byteLength(basename(file))} bytes long, over the ${MAX_NAME_BYTES} most file systems allow`, `give ${option} a shorter name`);
+  if (Buffer.byteLength(resolve(file)) > 4000) throw refuse("bad-option", "the path is too long for the file system", `give ${option} a shorter path`);
   const folder = dirname(file);
-  if (!existsSync(folder) || !statSync(folder).isDirectory()) {
-    throw new InputError([{ code: "no-folder", file, message: `folder ${folder} does not exist`, hint: `create it first or choose another ${option} path` }]);
+  if (!existsSync(folder) || !statSync(folder).isDirectory()) throw refuse("no-folder", `folder ${folder} does not exist`, `create it first or choose another ${option} path`);
+  let stats;
+  try {
+    stats = lstatSync(file);
+  } catch {
+    return; // nothing there yet
   }
-  if (existsSync(file)) {
-    if (statSync(file).isDirectory()) throw new InputError([{ code: "not-a-file", file, message: "is a folder", hint: `give ${option} a file name, not a folder` }]);
-    if (!force) throw new InputError([{ code: "exists", file, message: "already exists and was left untouched", hint: `choose another ${option} path, or add --force to replace it` }]);
+  const input = runInputAt(file);
+  if (input !== undefined) throw refuse("output-is-input", `is ${input === file ? "" : `the same file as ${input}, `}an input of this run, and is never overwritten, even with --force`, `give ${option} another name`);
+  const target = stats.isSymbolicLink() ? safeStat(file) : stats;
+  if (target?.isDirectory()) throw refuse("not-a-file", "is a folder", `give ${option} a file name, not a folder`);
+  if (target !== undefined && !target.isFile()) throw refuse("not-a-file", `is ${target.isFIFO() ? "a named pipe (FIFO)" : target.isSocket() ? "a socket" : "a device"}, not a regular file, and is never replaced`, `give ${option} a regular file name`);
+  if (!force) throw existsError(file, option);
+}
+
+function safeStat(file: string) {
+  try {
+    return statSync(file);
+  } catch {
+    return undefined;
   }
 }
 

@@ -1,9 +1,10 @@
 import { describe, expect, it } from "vitest";
+import geographiclib from "geographiclib";
 import { assignCrashes } from "../../src/geo/assignCrashes.js";
 import { fromPlane, localPlane, type LocalPlane } from "../../src/geo/localPlane.js";
 import type { NetworkSite } from "../../src/geo/NetworkSite.js";
-import { pointSegmentDistance } from "../../src/geo/pointSegmentDistance.js";
 import type { SiteKind } from "../../src/model/types.js";
+import { checkAgainstBruteForce } from "./checkAgainstBruteForce.js";
 
 // A hand-drawn network in metres about a centre; it is symmetric about (0, 0) so the plane that
 // assignCrashes centres on the sites' extent is this same plane, and distances below are exact.
@@ -52,9 +53,11 @@ describe("assignCrashes on a hand-drawn network", () => {
     expect([...result.outsideExtent]).toEqual([0, 1, 0]);
     expect(result.distanceM[0]).toBeNaN();
   });
-  it("reports the distance to the chosen site", () => {
-    const result = assignCrashes(network, [at(0, 30)]);
-    expect(result.distanceM[0]).toBeCloseTo(30, 6);
+  it("reports the distance to the chosen site (GeographicLib's geodesic, to 0.1 mm)", () => {
+    const crash = at(0, 30);
+    const result = assignCrashes(network, [crash]);
+    const site = network.find((s) => s.id === "I-A")!.paths[0]![0]!;
+    expect(result.distanceM[0]).toBeCloseTo(geographiclib.Geodesic.WGS84.Inverse(site.lat, site.lon, crash.lat, crash.lon).s12!, 4);
   });
   it("honours other radii", () => {
     const result = assignCrashes(network, [at(0, 60), at(0, 40)], { intersectionRadiusM: 30, segmentBufferM: 25 });
@@ -77,31 +80,8 @@ describe("assignCrashes agrees with a brute-force search", () => {
     const far: [number, number][] = Array.from({ length: 200 }, () => [-20_000 + 40_000 * next(), -20_000 + 40_000 * next()]);
     const crashes = [...near, ...far];
     const result = assignCrashes(sites, crashes.map(([x, y]) => at(x, y)));
-    // The brute force uses assignCrashes's own plane so that it checks the search, not the projection.
-    const own = localPlane(centreOfSites(sites));
-    const toXY = (p: { lon: number; lat: number }) => [(p.lon - own.centre.lon) * own.metresPerDegreeLon, (p.lat - own.centre.lat) * own.metresPerDegreeLat] as const;
-    let assigned = 0;
-    crashes.forEach(([x0, y0], index) => {
-      const [x, y] = toXY(at(x0, y0));
-      const distance = (s: NetworkSite) => Math.min(...s.paths.flatMap((path) => (path.length === 1 ? [Math.hypot(x - toXY(path[0]!)[0], y - toXY(path[0]!)[1])] : path.slice(1).map((p, k) => pointSegmentDistance(x, y, ...toXY(path[k]!), ...toXY(p))))));
-      const best = (kind: (s: NetworkSite) => boolean, reach: number) =>
-        sites.map((s, i) => ({ i, d: distance(s), s })).filter((e) => kind(e.s) && e.d <= reach).sort((a, b) => a.d - b.d || (a.s.id < b.s.id ? -1 : 1))[0];
-      const expected = best((s) => s.kind === "intersection", 50) ?? best((s) => s.kind !== "intersection", 15);
-      expect(result.site[index]).toBe(expected?.i ?? -1);
-      if (expected) assigned++;
-      else {
-        const nearest = sites.map((s, i) => ({ i, d: distance(s), id: s.id })).sort((a, b) => a.d - b.d || (a.id < b.id ? -1 : 1))[0]!;
-        expect(result.nearestSite[index]).toBe(nearest.i);
-      }
-    });
+    const { assigned } = checkAgainstBruteForce(sites, crashes.map(([x, y]) => at(x, y)), result);
     expect(assigned).toBeGreaterThan(200); // both outcomes were exercised
     expect(assigned).toBeLessThan(1800);
   });
 });
-
-function centreOfSites(sites: readonly NetworkSite[]) {
-  const points = sites.flatMap((s) => s.paths.flat());
-  const lons = points.map((p) => p.lon);
-  const lats = points.map((p) => p.lat);
-  return { lon: (Math.min(...lons) + Math.max(...lons)) / 2, lat: (Math.min(...lats) + Math.max(...lats)) / 2 };
-}

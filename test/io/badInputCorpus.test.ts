@@ -92,6 +92,7 @@ const CASES: readonly Case[] = [
   { name: "budget-words", code: "schema", line: 5, column: 9, path: "budget" },
   { name: "budget-unit-word", code: "schema", line: 5, column: 9, path: "budget" },
   { name: "budget-decimal-comma", code: "schema", line: 5, column: 9, path: "budget" },
+  { name: "budget-hex", code: "not-decimal", line: 5, column: 9 }, // YAML would read 0x7A120 as 500000
   { name: "max-treatments-zero", code: "schema", line: 11, column: 23, path: "maxTreatmentsPerSite" },
   { name: "share-above-one", code: "schema", line: 14, column: 14, path: "rules.spendCaps[0].share" },
   { name: "spend-rule-both", code: "rule-amount", line: 13, column: 7, path: "rules.spendCaps[0]" },

@@ -72,3 +72,38 @@ describe("readCrashMapping", () => {
     expect(problems.map((p) => [p.code, p.line])).toEqual([["mapping", 2], ["mapping", 4]]);
   });
 });
+
+describe("readSitesGeojson takes JSON numbers only", () => {
+  const feature = (coordinates: string) => `{\n  "type": "FeatureCollection",\n  "features": [\n    { "type": "Feature", "properties": { "id": "I-1", "district": "N", "name": "0x1F \\" Main" },\n      "geometry": { "type": "Point", "coordinates": ${coordinates} } }\n  ]\n}\n`;
+  it("refuses hexadecimal, octal, leading-zero and infinite coordinates at their line and column", () => {
+    for (const [coordinates, token] of [["[0x1F, 55.4]", "0x1F"], ["[10.4, 0o17]", "0o17"], ["[010.4, 55.4]", "010.4"], ["[.inf, 55.4]", ".inf"], ["[+10.4, 55.4]", "+10.4"], ["[10.4, 55.]", "55."]] as const) {
+      const text = feature(coordinates);
+      const problems = problemsOf(() => readSitesGeojson(write("hex.geojson", text)));
+      // Numbers in base 16 or 8 are refused by the YAML reader itself (code not-decimal), the rest by the GeoJSON checks.
+      expect(problems[0], coordinates).toMatchObject({ code: /^0[xo]/.test(token) ? "not-decimal" : "geojson", line: 5, column: text.split("\n")[4]!.indexOf(token) + 1 });
+    }
+  });
+  it("reads decimal and exponent coordinates, and text that only looks like a number", () => {
+    const sites = readSitesGeojson(write("ok-numbers.geojson", feature("[1.04e1, -0.5e-0]")));
+    expect(sites[0]!.paths[0]![0]).toEqual({ lon: 10.4, lat: -0.5 });
+    expect(sites[0]!.name).toBe('0x1F " Main');
+  });
+});
+
+describe("site maps and mappings with CR or mixed line ends", () => {
+  it("reads a GeoJSON whose lines end in CR, CRLF or LF alike, and locates problems on the editor's line", () => {
+    const lines = ["{", '  "type": "FeatureCollection",', '  "features": [', '    { "type": "Feature", "properties": { "id": "I-1", "district": "N" }, "geometry": { "type": "Point", "coordinates": [10.4,', "      55.4] } },", '    { "type": "Feature", "properties": { "id": "I-2" }, "geometry": { "type": "Point", "coordinates": [10.5, 55.5] } }', "  ]", "}"];
+    for (const end of ["\n", "\r\n", "\r"]) {
+      const problems = problemsOf(() => readSitesGeojson(write("cr.geojson", lines.join(end))));
+      expect(problems.map((p) => [p.code, p.line, p.path])).toEqual([["geojson", 6, "features[1].properties.district"]]);
+      const fixed = lines.map((line) => line.replace('{ "id": "I-2" }', '{ "id": "I-2", "district": "S" }'));
+      expect(readSitesGeojson(write("cr-ok.geojson", fixed.join(end))).map((site) => site.paths[0]![0])).toEqual([{ lon: 10.4, lat: 55.4 }, { lon: 10.5, lat: 55.5 }]);
+      const hex = fixed.map((line) => line.replace("[10.5, 55.5]", "[0x1F, 55.5]"));
+      expect(problemsOf(() => readSitesGeojson(write("cr-hex.geojson", hex.join(end))))[0]).toMatchObject({ line: 6 });
+    }
+  });
+  it("reads a mapping with CR line ends and points at the right line", () => {
+    const problems = problemsOf(() => readCrashMapping(write("cr.yaml", "columns:\r  latitude: LAT\rseverity:\r  '9': X\r")));
+    expect(problems.map((p) => [p.code, p.line])).toEqual([["mapping", 4]]);
+  });
+});

@@ -8,12 +8,15 @@ import { writeOutputFile } from "../../src/io/writeOutputFile.js";
 // Pass-through spies, so single calls can be made to fail as a full disk or a crash would.
 vi.mock("node:fs", async (importOriginal) => {
   const actual = await importOriginal<typeof import("node:fs")>();
-  return { ...actual, renameSync: vi.fn(actual.renameSync), writeSync: vi.fn(actual.writeSync) };
+  return { ...actual, renameSync: vi.fn(actual.renameSync), linkSync: vi.fn(actual.linkSync), writeSync: vi.fn(actual.writeSync) };
 });
 
 const scratch = fs.mkdtempSync(join(tmpdir(), "averta-write-"));
 afterAll(() => fs.rmSync(scratch, { recursive: true, force: true }));
-afterEach(() => vi.mocked(fs.renameSync).mockClear());
+afterEach(() => {
+  vi.mocked(fs.renameSync).mockClear();
+  vi.mocked(fs.linkSync).mockClear();
+});
 
 let counter = 0;
 function freshFolder(): string {
@@ -23,23 +26,39 @@ function freshFolder(): string {
 }
 
 describe("writeOutputFile", () => {
-  it("writes the whole content through a temporary file in the same folder, then renames it", () => {
+  it("writes the whole content through a temporary file in the same folder, then links it to a name still free", () => {
     const folder = freshFolder();
     const target = join(folder, "plan.json");
     const content = "x".repeat(100_000);
-    vi.mocked(fs.renameSync).mockImplementationOnce((from, to) => {
-      // At the moment of the rename the target does not exist yet and the temporary file is complete.
+    vi.mocked(fs.linkSync).mockImplementationOnce((from, to) => {
+      // At the moment of publishing the target does not exist yet and the temporary file is complete.
       expect(fs.existsSync(target)).toBe(false);
       expect(join(String(from), "..")).toBe(folder);
       expect(fs.readFileSync(from, "utf8")).toBe(content);
       expect(to).toBe(target);
       fs.writeFileSync(String(to), fs.readFileSync(from));
-      fs.rmSync(from);
     });
     writeOutputFile(target, content, false);
-    expect(vi.mocked(fs.renameSync)).toHaveBeenCalledTimes(1);
+    expect(vi.mocked(fs.linkSync)).toHaveBeenCalledTimes(1);
+    expect(vi.mocked(fs.renameSync)).not.toHaveBeenCalled();
     expect(fs.readFileSync(target, "utf8")).toBe(content);
     expect(fs.readdirSync(folder)).toEqual(["plan.json"]);
+  });
+
+  it("writes to its end when the system writes only part of a buffer at a time", () => {
+    const folder = freshFolder();
+    const target = join(folder, "big.csv");
+    const content = "0123456789".repeat(10_000);
+    const actual = vi.mocked(fs.writeSync).getMockImplementation()!;
+    const write = actual as unknown as (fd: number, buffer: Uint8Array, offset: number, length: number) => number;
+    // A full pipe or a signal can make each write take fewer bytes than asked.
+    vi.mocked(fs.writeSync).mockImplementation(((fd: number, buffer: Uint8Array, offset: number, length: number) => write(fd, buffer, offset, Math.min(length, 777))) as typeof fs.writeSync);
+    try {
+      writeOutputFile(target, content, false);
+    } finally {
+      vi.mocked(fs.writeSync).mockImplementation(actual);
+    }
+    expect(fs.readFileSync(target, "utf8")).toBe(content);
   });
 
   it("leaves an existing file untouched without force, and says how to replace it", () => {
@@ -77,9 +96,9 @@ describe("writeOutputFile", () => {
     expect(fs.readdirSync(folder)).toEqual([]);
   });
 
-  it("a failing rename leaves neither the target nor the temporary file", () => {
+  it("a failing publish leaves neither the target nor the temporary file", () => {
     const folder = freshFolder();
-    vi.mocked(fs.renameSync).mockImplementationOnce(() => {
+    vi.mocked(fs.linkSync).mockImplementationOnce(() => {
       throw Object.assign(new Error("input/output error"), { code: "EIO" });
     });
     expect(() => writeOutputFile(join(folder, "plan.json"), "{}", false)).toThrow("input/output error");

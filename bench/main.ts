@@ -2,6 +2,7 @@
 // Sections are plain async functions returning rows; add new ones beside these.
 import { mkdirSync, writeFileSync } from "node:fs";
 import { cpus } from "node:os";
+import { planBench } from "./planBench.js";
 import { formatResolveBench, runResolveBench } from "./resolveBench.js";
 import { formatSolverBench, runSolverBench } from "./solverBench.js";
 import { tallyBench } from "./tallyBench.js";
@@ -23,6 +24,10 @@ console.log(formatResolveBench(resolves));
 writeFileSync("bench-results/solver.json", `${JSON.stringify({ machine, highsSeconds, rows, resolves }, null, 2)}\n`);
 console.log("\nwritten: bench-results/solver.json");
 
+console.log("\nPlan at scale: YAML in, table or JSON out");
+const plan = planBench();
+console.log(plan.summary);
+
 // Tally before uncertainty: its peak memory is read from this process's maximum resident size.
 console.log("\nCrash assignment (tally): generated crashes against generated sites");
 const tally = tallyBench();
@@ -31,5 +36,5 @@ console.log(tally.summary);
 console.log("\nUncertainty: draws with re-optimisation in each (plan included, sensitivity excluded)");
 const uncertainty = await uncertaintyBench();
 
-writeFileSync("bench-results/pipeline.json", `${JSON.stringify({ machine, tally, uncertainty }, null, 2)}\n`);
+writeFileSync("bench-results/pipeline.json", `${JSON.stringify({ machine, plan, tally, uncertainty }, null, 2)}\n`);
 console.log("\nwritten: bench-results/pipeline.json");

@@ -1,8 +1,8 @@
-import Table from "cli-table3";
 import type { PlanComparison } from "../analysis/comparePlans.js";
 import { CAUTIONS } from "./cautions.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
 import { KSI_AVOIDED_LABEL } from "./ksiAvoidedLabel.js";
+import { textTable } from "./textTable.js";
 
 /** Names the two sides of a comparison, e.g. "budget 5,000,000" and "budget 9,700,000". */
 export interface CompareLabels {
@@ -15,29 +15,22 @@ export interface CompareLabels {
 export function compareTable(comparison: PlanComparison, labels: CompareLabels): string {
   const { totalsA, totalsB, delta } = comparison;
   const signed = (text: string, value: number) => (value > 0 ? `+${text}` : text);
-  const totals = new Table({
-    head: ["", labels.a, labels.b, "Change (B − A)"],
-    colAligns: ["left", "right", "right", "right"],
-    style: { head: [], border: [] },
-  } as ConstructorParameters<typeof Table>[0]);
-  totals.push(
+  const totals = textTable(
+    [{ heading: "" }, { heading: labels.a, align: "right" }, { heading: labels.b, align: "right" }, { heading: "Change (B − A)", align: "right" }],
+    [
     ["Status", comparison.sideA.status, comparison.sideB.status, ""],
     [`Spend (${labels.currency})`, formatMoney(totalsA.cost), formatMoney(totalsB.cost), signed(formatMoney(delta.spend), delta.spend)],
     ["Projects", String(totalsA.projects), String(totalsB.projects), signed(String(delta.projects), delta.projects)],
     [KSI_AVOIDED_LABEL, formatFixed(totalsA.ksiAvoided, 2), formatFixed(totalsB.ksiAvoided, 2), signed(formatFixed(delta.ksiAvoided, 2), delta.ksiAvoided)],
     [`Benefit PV (${labels.currency})`, formatMoney(totalsA.benefitPV), formatMoney(totalsB.benefitPV), signed(formatMoney(delta.benefitPV), delta.benefitPV)],
     ["B/C", formatFixed(totalsA.bcRatio, 2), formatFixed(totalsB.bcRatio, 2), signed(formatFixed(delta.bcRatio, 2), delta.bcRatio)],
+    ],
   );
   const projectTable = (rows: readonly { site: string; name: string; treatments: string; cost: string; ksi: string }[]) => {
-    const table = new Table({
-      head: ["Site", "Name", "Treatments", `Cost (${labels.currency})`, KSI_AVOIDED_LABEL],
-      colAligns: ["left", "left", "left", "right", "right"],
-      style: { head: [], border: [] },
-      wordWrap: true,
-      colWidths: [null, 28, 44],
-    } as ConstructorParameters<typeof Table>[0]);
-    for (const row of rows) table.push([row.site, row.name, row.treatments, row.cost, row.ksi]);
-    return table.toString();
+    return textTable(
+      [{ heading: "Site" }, { heading: "Name", maxWidth: 26 }, { heading: "Treatments", maxWidth: 42 }, { heading: `Cost (${labels.currency})`, align: "right" }, { heading: KSI_AVOIDED_LABEL, align: "right" }],
+      rows.map((row) => [row.site, row.name, row.treatments, row.cost, row.ksi]),
+    );
   };
   const plain = (project: PlanComparison["entering"][number]) => ({
     site: project.site,
@@ -51,7 +44,7 @@ export function compareTable(comparison: PlanComparison, labels: CompareLabels):
   const lines = [
     `What-if: A = ${labels.a}, B = ${labels.b}`,
     "",
-    totals.toString(),
+    totals,
     ...[["A", comparison.sideA] as const, ["B", comparison.sideB] as const]
       .filter(([, side]) => side.diagnosis !== null)
       .map(([name, side]) => `No list in ${name}: ${side.diagnosis}`),

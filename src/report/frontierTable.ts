@@ -1,8 +1,8 @@
-import Table from "cli-table3";
 import type { FrontierSummary } from "../analysis/summariseFrontier.js";
 import { CAUTIONS } from "./cautions.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
 import { KSI_AVOIDED_LABEL } from "./ksiAvoidedLabel.js";
+import { textTable } from "./textTable.js";
 
 /** What a frontier report needs besides the rows. */
 export interface FrontierContext {
@@ -16,13 +16,10 @@ export interface FrontierContext {
 /** The budget frontier as a terminal table with the diminishing-returns reading and the cautions. */
 export function frontierTable(summary: FrontierSummary, context: FrontierContext): string {
   const { currency } = context;
-  const table = new Table({
-    head: [`Budget (${currency})`, "Status", `Spend (${currency})`, "Projects", KSI_AVOIDED_LABEL, `Benefit PV (${currency})`, "B/C", `K+A crashes avoided per extra 1M ${currency}`, ""],
-    colAligns: ["right", "left", "right", "right", "right", "right", "right", "right", "left"],
-    style: { head: [], border: [] },
-  } as ConstructorParameters<typeof Table>[0]);
-  for (const row of summary.rows) {
-    table.push([
+  const right = (heading: string) => ({ heading, align: "right" as const });
+  const table = textTable(
+    [right(`Budget (${currency})`), { heading: "Status" }, right(`Spend (${currency})`), right("Projects"), right(KSI_AVOIDED_LABEL), right(`Benefit PV (${currency})`), right("B/C"), right(`K+A crashes avoided per extra 1M ${currency}`), { heading: "" }],
+    summary.rows.map((row) => [
       formatMoney(row.budget) + (row.budget === context.scenarioBudget ? " ◀" : ""),
       row.status,
       formatMoney(row.spend),
@@ -32,14 +29,14 @@ export function frontierTable(summary: FrontierSummary, context: FrontierContext
       formatFixed(row.bcRatio, 2),
       row.marginalKsiPerMillion === null ? "" : formatFixed(row.marginalKsiPerMillion, 2),
       row.diminishing ? "< half" : "",
-    ]);
-  }
+    ]),
+  );
   const reference = summary.referenceKsiPerMillion;
   const lines = [
     `${context.scenarioName}: budget frontier (${context.objective === "ksi" ? "maximising K+A crashes avoided" : "maximising benefit PV"} at each level)`,
     `Scenario budget ${formatMoney(context.scenarioBudget)} ${currency}.`,
     "",
-    table.toString(),
+    table,
     `K+A crashes avoided per extra 1M ${currency} = (K+A crashes avoided at this level − at the previous level) ÷ (budget step in millions of ${currency}).`,
     reference === null
       ? "No rising budget step, so no diminishing-returns reading."

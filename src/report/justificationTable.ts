@@ -1,36 +1,28 @@
-import Table from "cli-table3";
 import type { PlanCase } from "../analysis/casePlan.js";
 import type { ProgrammeTotals } from "../analysis/summariseSelection.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
 import { KSI_AVOIDED_LABEL } from "./ksiAvoidedLabel.js";
 import { marginalValueWords } from "./marginalValueWords.js";
 import { rankingComparisonText } from "./rankingComparisonText.js";
+import { PLAN_TABLE_ROWS } from "./planTable.js";
+import { textTable } from "./textTable.js";
 
 /** The justification section of `plan`'s table: the case for each funded project, why the rest are out, upgrades and the ranking comparison at equal spend. */
-export function justificationTable(planCase: PlanCase): string {
+export function justificationTable(planCase: PlanCase, options: { readonly all?: boolean } = {}): string {
   const { justification, upgrades, ranking, atRankingSpend, extendedRanking, currency } = planCase;
-  const style = { head: [], border: [] };
   // B/C, NPV and cost per K+A crash are in the list above; this table adds what the list cannot show.
-  const funded = new Table({
-    head: ["Site", "B/C rank", "Other alternatives at the site"],
-    colAligns: ["left", "right", "right"],
-    style,
-  } as ConstructorParameters<typeof Table>[0]);
-  for (const project of justification.funded) {
-    funded.push([
+  const funded = textTable(
+    [{ heading: "Site" }, { heading: "B/C rank", align: "right" }, { heading: "Other alternatives at the site", align: "right" }],
+    capped(justification.funded, options.all).map((project) => [
       project.site,
       `${project.bcRank} of ${justification.funded.length}`,
       [project.alternativesNotChosen === 0 ? "" : `${project.alternativesNotChosen} not chosen`, project.sharedCrashCells === 0 ? "" : `treatments share ${project.sharedCrashCells} crash cell(s)`].filter((text) => text !== "").join("; "),
-    ]);
-  }
-  const out = new Table({
-    head: ["Site", "Name", "Why not funded"],
-    colAligns: ["left", "left", "left"],
-    style,
-    wordWrap: true,
-    colWidths: [null, 28, 70],
-  } as ConstructorParameters<typeof Table>[0]);
-  for (const site of justification.notFunded) out.push([site.site, site.name, site.explanation]);
+    ]),
+  );
+  const out = textTable(
+    [{ heading: "Site" }, { heading: "Name", maxWidth: 26 }, { heading: "Why not funded", maxWidth: 68 }],
+    capped(justification.notFunded, options.all).map((site) => [site.site, site.name, site.explanation]),
+  );
 
   const lambda = justification.budgetMarginalValue;
   const unit = planCase.objective === "ksi" ? "K+A crash avoided" : `${currency} of benefit PV`;
@@ -38,13 +30,15 @@ export function justificationTable(planCase: PlanCase): string {
   const text = rankingComparisonText(planCase);
   const lines = [
     "Why these projects",
-    funded.toString(),
+    funded,
+    ...moreNote(justification.funded.length, options.all),
     justification.funded.some((project) => project.alternativesNotChosen > 0)
       ? "Other alternatives at funded sites were not chosen because a better alternative at the same site was."
       : "",
     "",
     "Why not the others",
-    justification.notFunded.length === 0 ? "Every candidate site is funded." : out.toString(),
+    justification.notFunded.length === 0 ? "Every candidate site is funded." : out,
+    ...moreNote(justification.notFunded.length, options.all),
     lambda === null
       ? "No entry thresholds: the budget's marginal value is unknown for this programme (policy rules also price the margin)."
       : `Thresholds use the budget's marginal value λ = ${marginalValueWords(lambda, planCase.objective, currency)} at the margin (from the ${justification.marginalValueSource === "solver" ? "solver" : "LP relaxation"}), ` +
@@ -77,14 +71,11 @@ export function justificationTable(planCase: PlanCase): string {
 function rankingTable(planCase: PlanCase): string {
   const { ranking, atRankingSpend, extendedRanking, currency } = planCase;
   const atSpend = atRankingSpend.extraKsiAvoided === null ? null : atRankingSpend.plan.totals;
-  const table = new Table({
-    head: ["", "Optimal list", "B/C ranking", "Optimal at the ranking's spend", "Ranking carried on (incremental B/C)"],
-    colAligns: ["left", "right", "right", "right", "right"],
-    style: { head: [], border: [] },
-  } as ConstructorParameters<typeof Table>[0]);
   const lists: readonly (ProgrammeTotals | null)[] = [ranking.optimalTotals, ranking.rankingTotals, atSpend, extendedRanking.totals];
   const row = (label: string, cell: (totals: ProgrammeTotals) => string) => [label, ...lists.map((totals) => (totals === null ? "no list" : cell(totals)))];
-  table.push(
+  return textTable(
+    [{ heading: "" }, ...["Optimal list", "B/C ranking", "Optimal at the ranking's spend", "Ranking carried on (incremental B/C)"].map((heading) => ({ heading, align: "right" as const }))],
+    [
     [`Budget (${currency})`, formatMoney(planCase.budget), formatMoney(planCase.budget), formatMoney(atRankingSpend.budget), formatMoney(planCase.budget)],
     row(`Spend (${currency})`, (totals) => formatMoney(totals.cost)),
     row("Projects", (totals) => String(totals.projects)),
@@ -92,8 +83,17 @@ function rankingTable(planCase: PlanCase): string {
     row(`Benefit PV (${currency})`, (totals) => formatMoney(totals.benefitPV)),
     row("B/C", (totals) => formatFixed(totals.bcRatio, 2)),
     ["Meets the policy rules", "yes", yesNo(ranking.rankingMeetsRules), atSpend === null ? "no list" : "yes", yesNo(extendedRanking.meetsRules)],
+    ],
   );
-  return table.toString();
+}
+
+/** The first PLAN_TABLE_ROWS entries unless `all`: the JSON carries every one. */
+function capped<T>(entries: readonly T[], all: boolean | undefined): readonly T[] {
+  return all === true ? entries : entries.slice(0, PLAN_TABLE_ROWS);
+}
+
+function moreNote(count: number, all: boolean | undefined): string[] {
+  return all === true || count <= PLAN_TABLE_ROWS ? [] : [`… and ${count - PLAN_TABLE_ROWS} more (--all lists every one; --format json carries them all).`];
 }
 
 function yesNo(flag: boolean): string {

@@ -1,4 +1,3 @@
-import Table from "cli-table3";
 import { planMethodNotes } from "../analysis/planMethodNotes.js";
 import type { PlanResult } from "../analysis/planProgramme.js";
 import { sitesWithoutCandidates } from "../model/sitesWithoutCandidates.js";
@@ -8,42 +7,46 @@ import { formatFixed, formatMoney } from "./formatNumber.js";
 import { hasList } from "./hasList.js";
 import { KSI_AVOIDED_LABEL } from "./ksiAvoidedLabel.js";
 import { noCandidatesText } from "./noCandidatesText.js";
+import { textTable } from "./textTable.js";
 
-/** The funded list as a terminal table, with totals against the budget, any extra sections (before the cautions) and the cautions. */
-export function planTable(result: PlanResult, sections: readonly string[] = []): string {
+/** Projects the table lists unless asked for all: beyond this a terminal list stops being read. */
+export const PLAN_TABLE_ROWS = 50;
+
+/**
+ * The funded list as a terminal table, with totals against the budget, any extra sections (before
+ * the cautions) and the cautions. A list longer than PLAN_TABLE_ROWS shows its projects of most
+ * objective value, largest first, unless `all`; the totals always cover the whole list.
+ */
+export function planTable(result: PlanResult, sections: readonly string[] = [], options: { readonly all?: boolean } = {}): string {
   const { prepared, solution, totals } = result;
   const currency = prepared.scenario.currency;
   const methodBySite = new Map(prepared.baselines.map((baseline) => [baseline.site, baseline.method === "empirical-bayes" ? "EB" : "observed"]));
   const noCandidates = noCandidatesText(sitesWithoutCandidates(prepared.scenario.sites));
-  const table = new Table({
-    head: ["Site", "Name", "District", "Baseline", "Treatments", `Cost (${currency})`, KSI_AVOIDED_LABEL, "B/C", `NPV (${currency})`, `Cost per K+A crash avoided (${currency})`],
-    colAligns: ["left", "left", "left", "left", "left", "right", "right", "right", "right", "right"],
-    style: { head: [], border: [] },
-    wordWrap: true,
-    colWidths: [null, 26, null, null, 34],
-  } as ConstructorParameters<typeof Table>[0]);
-  for (const { entry, alternative } of result.funded) {
-    table.push([
-      entry.site.id + (entry.required ? " *" : ""),
-      entry.site.name,
-      entry.site.district,
-      methodBySite.get(entry.site.id) ?? "",
-      alternative.treatments.join(" + "),
-      formatMoney(alternative.cost),
-      formatFixed(alternative.ksiAvoided, 2),
-      formatFixed(alternative.bcRatio, 2),
-      formatMoney(alternative.npv),
-      formatMoney(alternative.costPerKsi),
-    ]);
-  }
-  table.push([
-    { colSpan: 5, content: `Total: ${totals.projects} project(s)` },
-    formatMoney(totals.cost),
-    formatFixed(totals.ksiAvoided, 2),
-    formatFixed(totals.bcRatio, 2),
-    formatMoney(totals.npv),
-    formatMoney(totals.costPerKsi),
-  ]);
+  const cut = options.all !== true && result.funded.length > PLAN_TABLE_ROWS;
+  const value = prepared.objective === "ksi" ? (project: (typeof result.funded)[number]) => project.alternative.ksiAvoided : (project: (typeof result.funded)[number]) => project.alternative.benefitPV;
+  const listed = cut ? [...result.funded].sort((x, y) => value(y) - value(x)).slice(0, PLAN_TABLE_ROWS) : result.funded;
+  const right = (heading: string) => ({ heading, align: "right" as const });
+  // Figures are short, so their long headings wrap rather than widen the table.
+  const narrow = (heading: string) => ({ heading, align: "right" as const, maxWidth: 14 });
+  const table = textTable(
+    [{ heading: "Site" }, { heading: "Name", maxWidth: 24 }, { heading: "District" }, { heading: "Baseline" }, { heading: "Treatments", maxWidth: 32 }, narrow(`Cost (${currency})`), narrow(KSI_AVOIDED_LABEL), right("B/C"), narrow(`NPV (${currency})`), narrow(`Cost per K+A crash avoided (${currency})`)],
+    [
+      ...listed.map(({ entry, alternative }) => [
+        entry.site.id + (entry.required ? " *" : ""),
+        entry.site.name,
+        entry.site.district,
+        methodBySite.get(entry.site.id) ?? "",
+        alternative.treatments.join(" + "),
+        formatMoney(alternative.cost),
+        formatFixed(alternative.ksiAvoided, 2),
+        formatFixed(alternative.bcRatio, 2),
+        formatMoney(alternative.npv),
+        formatMoney(alternative.costPerKsi),
+      ]),
+      { lead: `Total: ${totals.projects} project(s)`, span: 5, cells: [formatMoney(totals.cost), formatFixed(totals.ksiAvoided, 2), formatFixed(totals.bcRatio, 2), formatMoney(totals.npv), formatMoney(totals.costPerKsi)] },
+    ],
+  );
+  const shownNote = `Showing the ${PLAN_TABLE_ROWS} of ${result.funded.length} funded projects with the most ${prepared.objective === "ksi" ? "K+A crashes avoided" : "benefit PV"}, largest first; the total covers all of them. --all lists every project; --format csv or json always carries them all.`;
 
   const lines = [
     `${prepared.scenario.name}`,
@@ -53,7 +56,8 @@ export function planTable(result: PlanResult, sections: readonly string[] = []):
     ...(solution.diagnosis ? [`Why: ${solution.diagnosis}`] : []),
     ...(noCandidates !== undefined ? [`${noCandidates}.`] : []),
     "",
-    hasList(result) ? table.toString() : "",
+    hasList(result) ? table : "",
+    ...(cut ? [shownNote] : []),
     result.funded.some((project) => project.entry.required) ? "* required by a must-fund rule" : "",
     hasList(result)
       ? `Optimality: upper bound ${formatFixed(solution.bound, 3)}, gap ${solution.gap.toExponential(1)} (engine: ${solution.engine}).`

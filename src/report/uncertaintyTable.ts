@@ -1,4 +1,3 @@
-import Table from "cli-table3";
 import type { UncertaintyResult } from "../analysis/uncertainty/analyseUncertainty.js";
 import type { SensitivityCase, SensitivityResult } from "../analysis/uncertainty/oneAtATimeSensitivity.js";
 import type { Spread } from "../analysis/uncertainty/summariseDraws.js";
@@ -11,8 +10,8 @@ import { CAUTIONS } from "./cautions.js";
 import { effectsUncertainText } from "./effectsUncertainText.js";
 import { formatFixed, formatMoney } from "./formatNumber.js";
 import { UNCERTAINTY_DEFINITIONS } from "./uncertaintyJson.js";
+import { textTable } from "./textTable.js";
 
-const plainStyle = { head: [], border: [] };
 
 function signed(value: number, decimals: number): string {
   return (value > 0 ? "+" : "") + formatFixed(value, decimals);
@@ -38,36 +37,25 @@ export function uncertaintyTable(result: UncertaintyResult, sensitivity: Sensiti
   const { plan, summary } = result;
   const { scenario } = plan.prepared;
   const currency = scenario.currency;
-  const spreads = new Table({
-    head: ["Chosen list over the draws", "Point", "Mean", "P5", "P50", "P95"],
-    colAligns: ["left", "right", "right", "right", "right", "right"],
-    style: plainStyle,
-  } as ConstructorParameters<typeof Table>[0]);
-  const row = (label: string, point: number, value: Spread, format: (n: number) => string) =>
-    spreads.push([label, format(point), format(value.mean), format(value.p5), format(value.p50), format(value.p95)]);
-  row("K+A crashes avoided", plan.totals.ksiAvoided, summary.planKsiAvoided, (n) => formatFixed(n, 2));
-  row(`Benefit PV (${currency})`, plan.totals.benefitPV, summary.planBenefitPV, formatMoney);
-  row("B/C", plan.totals.bcRatio, summary.planBcRatio, (n) => formatFixed(n, 2));
+  const row = (label: string, point: number, value: Spread, format: (n: number) => string) => [label, format(point), format(value.mean), format(value.p5), format(value.p50), format(value.p95)];
+  const spreads = textTable(
+    [{ heading: "Chosen list over the draws" }, ...["Point", "Mean", "P5", "P50", "P95"].map((heading) => ({ heading, align: "right" as const }))],
+    [
+      row("K+A crashes avoided", plan.totals.ksiAvoided, summary.planKsiAvoided, (n) => formatFixed(n, 2)),
+      row(`Benefit PV (${currency})`, plan.totals.benefitPV, summary.planBenefitPV, formatMoney),
+      row("B/C", plan.totals.bcRatio, summary.planBcRatio, (n) => formatFixed(n, 2)),
+    ],
+  );
 
-  const selections = new Table({
-    head: ["Site", "Treatments", "Selected", "In plan", "Class"],
-    colAligns: ["left", "left", "right", "left", "left"],
-    style: plainStyle,
-    wordWrap: true,
-    colWidths: [null, 44],
-  } as ConstructorParameters<typeof Table>[0]);
   const shown = summary.selections.filter((s) => s.inPlan || s.class !== "rare");
-  for (const s of shown) {
-    selections.push([s.site, s.treatments.join(" + "), `${formatFixed(100 * s.probability, 1)}%`, s.inPlan ? "yes" : "", s.class]);
-  }
-
-  const tornado = new Table({
-    head: ["Parameter (base)", "Low", "High"],
-    style: plainStyle,
-    wordWrap: true,
-    colWidths: [40, 40, 40],
-  } as ConstructorParameters<typeof Table>[0]);
-  for (const r of sensitivity.rows) tornado.push([`${r.parameter} (${r.base})`, caseText(r.low), caseText(r.high)]);
+  const selections = textTable(
+    [{ heading: "Site" }, { heading: "Treatments", maxWidth: 42 }, { heading: "Selected", align: "right" }, { heading: "In plan" }, { heading: "Class" }],
+    shown.map((s) => [s.site, s.treatments.join(" + "), `${formatFixed(100 * s.probability, 1)}%`, s.inPlan ? "yes" : "", s.class]),
+  );
+  const tornado = textTable(
+    [{ heading: "Parameter (base)", maxWidth: 38 }, { heading: "Low", maxWidth: 38 }, { heading: "High", maxWidth: 38 }],
+    sensitivity.rows.map((r) => [`${r.parameter} (${r.base})`, caseText(r.low), caseText(r.high)]),
+  );
 
   const unit = plan.prepared.objective === "ksi" ? "K+A crashes" : currency;
   const format = plan.prepared.objective === "ksi" ? (n: number) => formatFixed(n, 2) : formatMoney;
@@ -79,14 +67,14 @@ export function uncertaintyTable(result: UncertaintyResult, sensitivity: Sensiti
     `CMFs: ${effectsUncertain}.`,
     `Baselines: ${result.sampleBaselines ? baselinesDrawnText(result.baselines) : "held at their point estimates (--fixed-baseline)"}.`,
     "",
-    spreads.toString(),
+    spreads,
     `Probability the list's B/C exceeds 1: ${formatFixed(100 * summary.probabilityBcAboveOne, 1)}% (${bcAboveOne} of ${summary.draws} draws; ${effectsUncertain})`,
     `Regret (what the list loses against each draw's best list, ${unit}): mean ${format(summary.regret.mean)}, P95 ${format(summary.regret.p95)}`,
     ...(summary.planInfeasibleDraws > 0 ? [`The list breaks a rule in ${summary.planInfeasibleDraws} draw(s) (a KSI-share floor moved).`] : []),
     ...(summary.solvedDraws < summary.draws ? [`${summary.draws - summary.solvedDraws} draw(s) had no solved list: ${JSON.stringify(summary.statusCounts)}`] : []),
     "",
     `Selection probability: share of the ${summary.solvedDraws} solved draws' best lists, ${effectsUncertain} (core: ≥ ${CORE_PROBABILITY * 100}%; marginal: ≥ ${MARGINAL_PROBABILITY * 100}%; rare: below)`,
-    selections.toString(),
+    selections,
     ...(shown.length < summary.selections.length ? [`${summary.selections.length - shown.length} other site-alternative(s) were best in under ${MARGINAL_PROBABILITY * 100}% of draws (listed in --format json).`] : []),
     "",
     ...(summary.shaky.length === 0
@@ -94,7 +82,7 @@ export function uncertaintyTable(result: UncertaintyResult, sensitivity: Sensiti
       : [`Shaky projects: ${summary.shaky.length} funded project(s) selected in fewer than ${SHAKY_PROBABILITY * 100}% of the draws' best lists, largest cost first (${effectsUncertain}):`, ...summary.shaky.map(shakyLine)]),
     "",
     `One at a time: change in the chosen list's K+A crashes avoided (base ${formatFixed(sensitivity.baseKsiAvoided, 2)}) and B/C (base ${formatFixed(sensitivity.baseBcRatio, 2)}); "list changes" when re-optimising picks another list`,
-    tornado.toString(),
+    tornado,
     "",
     "Method:",
     `- ${UNCERTAINTY_DEFINITIONS.ksiAvoided}`,

@@ -64,53 +64,78 @@ export function dynamicProgrammeCore(problem: CoreProblem): CoreResult {
     }
     const candidates = hulls[k]!.undominated;
     const next = suffixBound(sorted, k + 1);
-    const size = stateCost.length * candidates.length;
-    if (size > 6 * MAX_STATES) {
+    const m = candidates.length;
+    if (stateCost.length * m > 6 * MAX_STATES) {
       stopped = true;
       break;
     }
-    const newCost = new Float64Array(size);
-    const newValue = new Float64Array(size);
-    const newParent = new Int32Array(size);
-    const newPick = new Int32Array(size);
-    let count = 0;
-    for (let s = 0; s < stateCost.length; s += 1) {
-      for (const a of candidates) {
-        const c = stateCost[s]! + costs[k]![a]!;
-        const left = problem.budget - c;
-        if (left < 0) continue;
-        const v = stateValue[s]! + values[k]![a]!;
-        const bound = v + next(left);
+    // States are sorted by cost with strictly rising values, so each candidate shifts them into
+    // another sorted list: an m-way merge by (cost, value descending, state, candidate) gives the
+    // same order a full sort would, in linear time (Nemhauser and Ullmann's merge, from memory).
+    const kc = costs[k]!;
+    const kv = values[k]!;
+    const position = new Int32Array(m);
+    const budget = problem.budget;
+    // Moves candidate j's pointer to its next state that fits and survives the bound.
+    const advance = (j: number): void => {
+      const a = candidates[j]!;
+      for (let s = position[j]!; s < stateCost.length; s += 1) {
+        const left = budget - (stateCost[s]! + kc[a]!);
+        if (left < 0) {
+          position[j] = stateCost.length; // costs only rise from here
+          return;
+        }
+        const bound = stateValue[s]! + kv[a]! + next(left);
         if (bound <= bestValue + tolerance) {
-          prunedBound = Math.max(prunedBound, bound);
+          if (bound > prunedBound) prunedBound = bound;
           continue;
         }
-        newCost[count] = c;
-        newValue[count] = v;
-        newParent[count] = s;
-        newPick[count] = a;
-        count += 1;
+        position[j] = s;
+        return;
       }
-    }
-    // Sort by cost, then value descending, then generation order; keep strictly rising values.
-    const order = new Int32Array(count);
-    for (let i = 0; i < count; i += 1) order[i] = i;
-    order.sort((x, y) => newCost[x]! - newCost[y]! || newValue[y]! - newValue[x]! || x - y);
-    const keep: number[] = [];
+      position[j] = stateCost.length;
+    };
+    for (let j = 0; j < m; j += 1) advance(j);
+    const keepCost: number[] = [];
+    const keepValue: number[] = [];
+    const keepParent: number[] = [];
+    const keepPick: number[] = [];
     let top = Number.NEGATIVE_INFINITY;
-    for (const i of order) {
-      if (newValue[i]! <= top) continue;
-      top = newValue[i]!;
-      keep.push(i);
+    for (;;) {
+      let pick = -1;
+      let pickCost = 0;
+      let pickValue = 0;
+      for (let j = 0; j < m; j += 1) {
+        const s = position[j]!;
+        if (s >= stateCost.length) continue;
+        const a = candidates[j]!;
+        const c = stateCost[s]! + kc[a]!;
+        const v = stateValue[s]! + kv[a]!;
+        if (pick < 0 || c < pickCost || (c === pickCost && (v > pickValue || (v === pickValue && s < position[pick]!)))) {
+          pick = j;
+          pickCost = c;
+          pickValue = v;
+        }
+      }
+      if (pick < 0) break;
+      if (pickValue > top) {
+        top = pickValue;
+        keepCost.push(pickCost);
+        keepValue.push(pickValue);
+        keepParent.push(position[pick]!);
+        keepPick.push(candidates[pick]!);
+      }
+      position[pick] += 1;
+      advance(pick);
     }
-    if (keep.length > MAX_STATES) {
+    if (keepCost.length > MAX_STATES) {
       stopped = true;
       break;
     }
-    stateCost = Float64Array.from(keep, (i) => newCost[i]!);
-    stateValue = Float64Array.from(keep, (i) => newValue[i]!);
-    parents.push(Int32Array.from(keep, (i) => newParent[i]!));
-    picks.push(Int32Array.from(keep, (i) => newPick[i]!));
+    stateCost = Float64Array.from(keepCost);
+    stateValue = Float64Array.from(keepValue);
+    parents.push(Int32Array.from(keepParent));
+    picks.push(Int32Array.from(keepPick));
   }
 
   const choice = Int32Array.from(problem.incumbent);

@@ -186,6 +186,11 @@ function searchRestricted(
       hulls[k]!.undominated.filter((a) => a === held || reduced.best[k]! - (value(g, a) - lambda * cost(g, a)) <= threshold),
     );
   }
+  // Groups that cost most to move off their best option go first: few partial programmes survive
+  // them, so the states multiply only over the last, cheapest-to-move groups.
+  const order = coreGroups.map((_, i) => i).sort((x, y) => reduced.secondGap[coreGroups[y]!]! - reduced.secondGap[coreGroups[x]!]! || x - y);
+  coreGroups.splice(0, coreGroups.length, ...order.map((i) => coreGroups[i]!));
+  coreCandidates.splice(0, coreCandidates.length, ...order.map((i) => coreCandidates[i]!));
   let incumbentCoreValue = 0;
   const coreIncumbent = Int32Array.from(coreGroups, (k, i) => {
     const a = incumbent[k]!;

@@ -8,7 +8,7 @@ import { checkOutputTarget } from "../../io/writeOutputFile.js";
 import type { Objective } from "../../model/types.js";
 import { planCsv } from "../../report/planCsv.js";
 import { planJson } from "../../report/planJson.js";
-import { planTable } from "../../report/planTable.js";
+import { PLAN_TABLE_ROWS, planTable } from "../../report/planTable.js";
 import { justificationJson } from "../../report/justificationJson.js";
 import { hasList } from "../../report/hasList.js";
 import { justificationTable } from "../../report/justificationTable.js";
@@ -27,6 +27,7 @@ interface PlanOptions {
   out?: string;
   force?: boolean;
   engine: string;
+  all?: boolean;
 }
 
 /** `averta plan <scenario>`: the optimal capital list within the budget. */
@@ -40,6 +41,7 @@ export function registerPlanCommand(program: Command, io: CliIo): void {
     .option("-f, --format <format>", "table, json or csv", "table")
     .option("-o, --out <file>", "write to this file instead of standard output")
     .option("--force", "replace --out if it already exists")
+    .option("--all", `list every project in the table, not only the ${PLAN_TABLE_ROWS} with the most value`)
     .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
     .action(async (file: string, options: PlanOptions) => {
       const format = parseChoiceOption("--format", options.format, FORMATS);
@@ -58,7 +60,7 @@ export function registerPlanCommand(program: Command, io: CliIo): void {
           ? JSON.stringify({ ...planJson(result), justification: planCase ? justificationJson(planCase) : null }, null, 2) + "\n"
           : format === "csv"
             ? planCsv(result)
-            : planTable(result, planCase ? [justificationTable(planCase)] : []);
+            : planTable(result, planCase ? [justificationTable(planCase, { all: options.all })] : [], { all: options.all });
       emitOutput(io, content, options.out, options.force === true);
     });
 }

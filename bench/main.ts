@@ -26,7 +26,7 @@ console.log("\nwritten: bench-results/solver.json");
 
 console.log("\nPlan at scale: YAML in, table or JSON out");
 const plan = planBench();
-console.log(plan.summary);
+for (const form of plan) console.log(form.summary);
 
 // Tally before uncertainty: its peak memory is read from this process's maximum resident size.
 console.log("\nCrash assignment (tally): generated crashes against generated sites");

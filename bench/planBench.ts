@@ -38,10 +38,14 @@ function timeScript(name: string, script: string): CommandFigure {
  * table and to JSON out, each in a fresh process; beside it the YAML library alone parsing the
  * same files, the yardstick of the load target.
  */
-export function planBench(sites = 20_000): PlanBenchResult {
+export function planBench(sites = 20_000): PlanBenchResult[] {
+  return (["yaml", "json"] as const).map((form) => planBenchForm(sites, form));
+}
+
+function planBenchForm(sites: number, form: "yaml" | "json"): PlanBenchResult {
   const folder = mkdtempSync(join(tmpdir(), "averta-plan-bench-"));
   try {
-    const scenario = writeLargeScenario(folder, sites);
+    const scenario = writeLargeScenario(folder, sites, form);
     const files = [scenario, join(folder, "sites.yaml")];
     const yamlModule = JSON.stringify(resolve("node_modules/yaml/dist/index.js"));
     const yamlAlone = timeScript(
@@ -56,7 +60,7 @@ export function planBench(sites = 20_000): PlanBenchResult {
     ];
     const line = (figure: CommandFigure) => `  ${figure.name.padEnd(48)} ${figure.seconds.toFixed(2).padStart(7)} s  ${figure.peakMiB.toFixed(0).padStart(6)} MiB${figure.exitCode === 0 ? "" : `  exit ${figure.exitCode}`}`;
     const summary = [
-      `${sites} generated sites (${(readFileSync(files[1]!).length / 1048576).toFixed(1)} MiB sites file), each in a fresh process:`,
+      `${sites} generated sites, sites file in ${form === "json" ? "YAML's JSON form (tally --json-form)" : "block YAML"} (${(readFileSync(files[1]!).length / 1048576).toFixed(1)} MiB), each in a fresh process:`,
       line(yamlAlone),
       ...commands.map((figure) => `${line(figure)}   target ≤ 2 s, ≤ 3× YAML (${(figure.seconds / yamlAlone.seconds).toFixed(1)}×), ≤ 600 MiB`),
     ].join("\n");

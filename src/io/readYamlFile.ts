@@ -1,6 +1,7 @@
 import { isAlias, isCollection, isMap, isPair, isScalar, LineCounter, parseDocument, visit, type Document, type Node } from "yaml";
 import { readInputBytes } from "./readInputBytes.js";
 import { InputError, type InputProblem } from "./InputError.js";
+import { parseJsonForm } from "./parseJsonForm.js";
 import { quoteValue } from "./quoteValue.js";
 
 /** Largest input file we read: a programme of 100,000 sites fits well below it. */
@@ -36,6 +37,9 @@ export function parseYamlText(source: string, label: string): YamlSource {
   // A lone CR ends a line (YAML 1.2, section 5.4; JSON white space), but the parser would keep it
   // as text: one character for another, so every offset, line and column stays right.
   const text = source.replace(/\r(?!\n)/g, "\n");
+  // YAML in its JSON form (what tally writes) takes the fast path, with the same checks.
+  const fast = parseJsonForm(text, label, MAX_NESTING_DEPTH);
+  if (fast !== undefined) return { file: label, data: fast.data, positionOf: (path, key = false) => fast.positionOf(path, key) };
   const lineCounter = new LineCounter();
   const doc = parseDocument(text, { lineCounter, uniqueKeys: true, prettyErrors: false, strict: true });
   const problems: InputProblem[] = doc.errors.map((error) => {

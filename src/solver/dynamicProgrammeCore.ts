@@ -75,6 +75,8 @@ export function dynamicProgrammeCore(problem: CoreProblem): CoreResult {
     const kc = costs[k]!;
     const kv = values[k]!;
     const position = new Int32Array(m);
+    // Per candidate, where its bound's segment walk stands (its budgets left only fall).
+    const cursor = new Int32Array(m).fill(next.ratios.length);
     const budget = problem.budget;
     // Moves candidate j's pointer to its next state that fits and survives the bound.
     const advance = (j: number): void => {
@@ -85,7 +87,9 @@ export function dynamicProgrammeCore(problem: CoreProblem): CoreResult {
           position[j] = stateCost.length; // costs only rise from here
           return;
         }
-        const bound = stateValue[s]! + kv[a]! + next(left);
+        const rest = boundAt(next, left, cursor[j]!);
+        cursor[j] = rest.cursor;
+        const bound = stateValue[s]! + kv[a]! + rest.value;
         if (bound <= bestValue + tolerance) {
           if (bound > prunedBound) prunedBound = bound;
           continue;
@@ -156,32 +160,44 @@ export function dynamicProgrammeCore(problem: CoreProblem): CoreResult {
 // The LP optimum of groups `first`.. as a function of their budget (-Infinity if even their
 // cheapest options do not fit): base values plus the greedy over their segments in ratio order.
 // Built per layer from one global sort, so memory stays linear in the number of segments.
-function suffixBound(sorted: SortedSegments, first: number): (budget: number) => number {
-  const prefixCost: number[] = [0];
-  const prefixValue: number[] = [0];
-  const ratios: number[] = [];
+interface SuffixBound {
+  readonly prefixCost: Float64Array;
+  readonly prefixValue: Float64Array;
+  readonly ratios: Float64Array;
+  readonly fixedCost: number;
+  readonly fixedValue: number;
+}
+
+function suffixBound(sorted: SortedSegments, first: number): SuffixBound {
+  let count = 0;
+  for (let j = 0; j < sorted.group.length; j += 1) if (sorted.group[j]! >= first) count += 1;
+  const prefixCost = new Float64Array(count + 1);
+  const prefixValue = new Float64Array(count + 1);
+  const ratios = new Float64Array(count);
+  let i = 0;
   for (let j = 0; j < sorted.group.length; j += 1) {
     if (sorted.group[j]! < first) continue;
-    prefixCost.push(prefixCost[prefixCost.length - 1]! + sorted.cost[j]!);
-    prefixValue.push(prefixValue[prefixValue.length - 1]! + sorted.value[j]!);
-    ratios.push(sorted.ratio[j]!);
+    prefixCost[i + 1] = prefixCost[i]! + sorted.cost[j]!;
+    prefixValue[i + 1] = prefixValue[i]! + sorted.value[j]!;
+    ratios[i] = sorted.ratio[j]!;
+    i += 1;
   }
-  const fixedCost = sorted.suffixBaseCost[first]!;
-  const fixedValue = sorted.suffixBaseValue[first]!;
-  return (budget) => {
-    const room = budget - fixedCost;
-    if (room < 0) return Number.NEGATIVE_INFINITY;
-    // Largest j with prefixCost[j] <= room: segments 0..j-1 fit whole, segment j in part.
-    let lo = 0;
-    let hi = ratios.length;
-    while (lo < hi) {
-      const mid = (lo + hi + 1) >> 1;
-      if (prefixCost[mid]! <= room) lo = mid;
-      else hi = mid - 1;
-    }
-    const partial = lo < ratios.length ? (room - prefixCost[lo]!) * ratios[lo]! : 0;
-    return fixedValue + prefixValue[lo]! + partial;
-  };
+  return { prefixCost, prefixValue, ratios, fixedCost: sorted.suffixBaseCost[first]!, fixedValue: sorted.suffixBaseValue[first]! };
+}
+
+/**
+ * The bound at `budget`, given `cursor`: an index at or above the answer, which is the largest j
+ * with prefixCost[j] <= room (segments before j fit whole, segment j in part). A caller whose
+ * budgets only fall keeps the returned cursor, so a whole layer walks the segments once instead
+ * of a binary search per state; the answer is the same.
+ */
+function boundAt(bound: SuffixBound, budget: number, cursor: number): { value: number; cursor: number } {
+  const room = budget - bound.fixedCost;
+  if (room < 0) return { value: Number.NEGATIVE_INFINITY, cursor };
+  let lo = cursor;
+  while (lo > 0 && bound.prefixCost[lo]! > room) lo -= 1;
+  const partial = lo < bound.ratios.length ? (room - bound.prefixCost[lo]!) * bound.ratios[lo]! : 0;
+  return { value: bound.fixedValue + bound.prefixValue[lo]! + partial, cursor: lo };
 }
 
 interface SortedSegments {

@@ -1,6 +1,7 @@
 import { closeSync, existsSync, fsyncSync, linkSync, lstatSync, openSync, readdirSync, renameSync, rmSync, statSync } from "node:fs";
 import { basename, dirname, join, resolve, sep } from "node:path";
-import { randomBytes } from "node:crypto";
+import { createHash, randomBytes } from "node:crypto";
+import { hostname } from "node:os";
 import { InputError } from "./InputError.js";
 import { runInputAt } from "./runInputs.js";
 import { writeAllSync } from "./writeAllSync.js";
@@ -10,8 +11,10 @@ import { writeProblem } from "./writeProblems.js";
 const MAX_NAME_BYTES = 255;
 
 // Temporaries sit beside the target (a rename across disks is not atomic) and are named
-// `.<name>.averta-<pid>-<random>.tmp`, so a later run can tell its own stale ones from the pid.
-const TEMPORARY = /^\..*\.averta-(\d+)-[0-9a-f]{8}\.tmp$/;
+// `.<name>.averta-<host>-<pid>-<random>.tmp`: a later run on the same machine (host tag) can tell
+// stale ones from the pid; another machine's, in a shared folder, are never touched.
+const HOST = createHash("sha256").update(hostname()).digest("hex").slice(0, 6);
+const TEMPORARY = new RegExp(`^\\..*\\.averta-${HOST}-(\\d+)-[0-9a-f]{8}\\.tmp$`);
 
 /**
  * Writes `content` to `file` so that a reader never sees half a file and nothing of a failed
@@ -26,7 +29,7 @@ export function writeOutputFile(file: string, content: string, force: boolean, o
   checkOutputTarget(file, force, option);
   const folder = dirname(file);
   removeStaleTemporaries(folder);
-  const temporary = join(folder, `.${basename(file).slice(0, 100)}.averta-${process.pid}-${randomBytes(4).toString("hex")}.tmp`);
+  const temporary = join(folder, `.${basename(file).slice(0, 100)}.averta-${HOST}-${process.pid}-${randomBytes(4).toString("hex")}.tmp`);
   try {
     const descriptor = openSync(temporary, "wx");
     try {

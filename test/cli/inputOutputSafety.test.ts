@@ -1,6 +1,7 @@
 import { spawn, spawnSync } from "node:child_process";
 import { copyFileSync, existsSync, linkSync, mkdirSync, openSync, mkdtempSync, readdirSync, readFileSync, rmSync, symlinkSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { createHash } from "node:crypto";
+import { hostname, tmpdir } from "node:os";
 import { join, resolve } from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
 import { terminalSafeText } from "../../src/cli/terminalSafeText.js";
@@ -106,16 +107,18 @@ describe("output safety", () => {
     }
   });
 
-  it("a run killed mid-write leaves a temporary the next write removes; a live run's is kept", () => {
+  it("a run killed mid-write leaves a temporary the next write removes; a live run's and another machine's are kept", () => {
     const here = folder();
+    // The host tag as writeOutputFile makes it: the first 6 hex digits of the SHA-256 of the host name.
+    const host = createHash("sha256").update(hostname()).digest("hex").slice(0, 6);
     // A process that has ended: its pid is free, as a killed writer's would be.
     const dead = spawnSync(process.execPath, ["-e", "process.stdout.write(String(process.pid))"], { encoding: "utf8" });
-    const stale = join(here, `.plan.json.averta-${dead.stdout}-0123abcd.tmp`);
-    const live = join(here, `.plan.json.averta-${process.pid}-4567cdef.tmp`);
-    writeFileSync(stale, "half a file");
-    writeFileSync(live, "being written");
+    const stale = `.plan.json.averta-${host}-${dead.stdout}-0123abcd.tmp`;
+    const live = `.plan.json.averta-${host}-${process.pid}-4567cdef.tmp`;
+    const elsewhere = `.plan.json.averta-${host === "abcdef" ? "fedcba" : "abcdef"}-${dead.stdout}-89abcdef.tmp`;
+    for (const name of [stale, live, elsewhere]) writeFileSync(join(here, name), "part of a file");
     writeOutputFile(join(here, "other.json"), "{}", false);
-    expect(readdirSync(here).sort()).toEqual([".plan.json.averta-" + process.pid + "-4567cdef.tmp", "other.json"]);
+    expect(readdirSync(here).sort()).toEqual([live, elsewhere, "other.json"].sort());
   });
 
   it("a real kill -9 during a large write is cleaned by the next write", async () => {

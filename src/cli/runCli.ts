@@ -1,6 +1,7 @@
 import { Command, CommanderError } from "commander";
 import { InputError, formatProblem } from "../io/InputError.js";
 import type { CliIo } from "./CliIo.js";
+import type { CommandOutcome } from "./solveExitCode.js";
 import { registerCheckCommand } from "./commands/checkCommand.js";
 import { registerCompareCommand } from "./commands/compareCommand.js";
 import { registerFrontierCommand } from "./commands/frontierCommand.js";
@@ -11,13 +12,16 @@ import { registerReportCommand } from "./commands/reportCommand.js";
 import { registerScreenCommand } from "./commands/screenCommand.js";
 import { registerTallyCommand } from "./commands/tallyCommand.js";
 
-/** Exit codes: 0 success, 1 internal fault, 2 bad input or usage. */
+/**
+ * Exit codes: 0 success, 1 internal fault, 2 bad input or usage; 3 no feasible list and 4 no list
+ * solved (EXIT_INFEASIBLE, EXIT_NOT_SOLVED in solveExitCode.ts), set by the commands that solve.
+ */
 export const EXIT_OK = 0;
 export const EXIT_FAULT = 1;
 export const EXIT_BAD_INPUT = 2;
 
-/** Builds the command tree; every command writes through `io`. */
-export function createProgram(io: CliIo): Command {
+/** Builds the command tree; every command writes through `io`, and solving commands set `outcome`. */
+export function createProgram(io: CliIo, outcome: CommandOutcome = { exitCode: EXIT_OK }): Command {
   const program = new Command("averta")
     .description("Choose the road-safety capital list that avoids the most K+A crashes (KSI crashes: a fatality or a serious injury; crashes, not people) within budget.")
     .version("0.1.0")
@@ -25,11 +29,11 @@ export function createProgram(io: CliIo): Command {
     .configureOutput({ writeOut: io.stdout, writeErr: io.stderr })
     .exitOverride();
   registerCheckCommand(program, io);
-  registerPlanCommand(program, io);
-  registerUncertaintyCommand(program, io);
-  registerReportCommand(program, io);
-  registerFrontierCommand(program, io);
-  registerCompareCommand(program, io);
+  registerPlanCommand(program, io, outcome);
+  registerUncertaintyCommand(program, io, outcome);
+  registerReportCommand(program, io, outcome);
+  registerFrontierCommand(program, io, outcome);
+  registerCompareCommand(program, io, outcome);
   registerTallyCommand(program, io);
   registerInitCommand(program, io);
   registerScreenCommand(program, io);
@@ -43,10 +47,11 @@ export function createProgram(io: CliIo): Command {
  * prints one line (the stack only with AVERTA_DEBUG=1).
  */
 export async function runCli(argv: readonly string[], io: CliIo): Promise<number> {
-  const program = createProgram(io);
+  const outcome: CommandOutcome = { exitCode: EXIT_OK };
+  const program = createProgram(io, outcome);
   try {
     await program.parseAsync([...argv], { from: "user" });
-    return EXIT_OK;
+    return outcome.exitCode;
   } catch (error) {
     if (error instanceof InputError) {
       io.stderr(error.problems.map((problem) => `error: ${formatProblem(problem)}`).join("\n") + "\n");

@@ -100,6 +100,7 @@ const CASES: readonly Case[] = [
   { name: "assumed-cv-percent", code: "schema", line: 11, column: 30, path: "uncertainty.assumedCmfCv" },
   { name: "assumed-cv-word", code: "schema", line: 12, column: 17, path: "uncertainty.assumedCmfCv" },
   // sites
+  { name: "too-many-alternatives", code: "too-many-alternatives", line: 26, column: 17, path: "sites[1].candidates" },
   { name: "sites-empty", code: "schema", line: 11, column: 8, path: "sites" },
   { name: "sites-null", code: "schema", line: 11, column: 7, path: "sites" },
   // a sites file the scenario names (sites: <file>), and siteCandidates

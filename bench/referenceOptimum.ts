@@ -27,6 +27,7 @@ export interface ReferenceOption {
   readonly benefitPV: number;
 }
 
+/** The reference's answer: status, the objective of its list, and every option it weighed. */
 export interface ReferenceResult {
   /** `time-limit`: HiGHS stopped with a feasible list (checked) but no proof; `objective` is that list's. */
   readonly status: "optimal" | "infeasible" | "time-limit" | "unsolved";

@@ -36,8 +36,8 @@ export interface CoreSearch {
  * - `complete`: every allowed programme worth more than floor + tolerance was weighed; `choice` is the
  *   best of them, or absent when there is none (then no allowed programme beats the floor).
  * - `incomplete`: stopped early (deadline, or more near misses on the other rows than 64 per programme
- *   listed); `choice`, if
- *   present, is still a feasible programme better than the floor, but nothing is proven.
+ *   listed); `choice`, if present, is still a feasible programme better than the floor, but nothing
+ *   is proven.
  * - `too-large`: the restriction has too many programmes to split into two halves of HALF_LIMIT.
  */
 export interface CoreSearchResult {

@@ -182,7 +182,7 @@ export function solveWithSideConstraints(
     const slice = degenerate && exhaustive.status === "too-large" && slicedAt !== threshold;
     if (slice) slicedAt = threshold;
     const runSeconds = slice ? Math.min(secondsLeft(), Math.max(1, secondsLeft() / 10)) : secondsLeft();
-const run = runHighs(highs, model.data, {
+    const run = runHighs(highs, model.data, {
       timeLimitSeconds: runSeconds,
       relativeGap: settings.relativeGap,
       absoluteGap: tolerance,

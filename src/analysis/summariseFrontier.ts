@@ -19,7 +19,7 @@ export interface FrontierRow {
    * level with the same budget as the previous one, and next to a level without a solved list.
    */
   readonly marginalKsiPerMillion: number | null;
-  /** This step buys less than half of what the reference (first) step bought per 1M. */
+  /** This step buys less than half of the "first 1M" rate (`referenceKsiPerMillion`). */
   readonly diminishing: boolean;
 }
 
@@ -27,11 +27,17 @@ export interface FrontierRow {
 export interface FrontierSummary {
   readonly rows: readonly FrontierRow[];
   /**
-   * The "first 1M" rate: the marginal KSI avoided per 1M of the first rising budget step between
-   * two solved levels (levels 0 → 1 unless the lowest budget cannot pay for the must-fund sites),
-   * or null when there is no such step.
+   * The "first 1M" rate, KSI avoided per extra 1M, measured from the first feasible level: from the
+   * lowest budget level with a list (optimal or time-limit) to the next higher budget level with a
+   * list, skipping levels without one in between. Levels below the must-fund sites' cost have no
+   * list, so when level 0 is infeasible the rate starts at the first level that can pay for them
+   * (`referenceFromBudget` says which). Null when fewer than two budgets have a list.
    */
   readonly referenceKsiPerMillion: number | null;
+  /** Budget of the level the "first 1M" rate is measured from (the first feasible level), or null. */
+  readonly referenceFromBudget: number | null;
+  /** Budget of the level it is measured to (the next higher level with a list), or null. */
+  readonly referenceToBudget: number | null;
   /**
    * The budget level past which every further step buys less than half the reference rate per 1M
    * (the level at the start of the first step of an unbroken diminishing run to the end), or null.
@@ -42,17 +48,21 @@ export interface FrontierSummary {
 /**
  * Reads a solved frontier: per level the spend, projects, KSI avoided, benefit PV and B/C of the
  * optimal list, the marginal KSI avoided per extra 1M since the previous level, and which steps
- * buy less than half of what the first step bought per 1M (diminishing returns).
+ * buy less than half of what the "first 1M" bought per 1M (diminishing returns), that rate being
+ * measured from the first feasible level (see `referenceKsiPerMillion`).
  */
 export function summariseFrontier(frontier: readonly FrontierLevel[]): FrontierSummary {
-  let reference: number | null = null;
+  const first = frontier.findIndex(isSolved);
+  const next = first < 0 ? -1 : frontier.findIndex((level, index) => index > first && isSolved(level) && level.budget > frontier[first]!.budget);
+  const from = frontier[first];
+  const to = frontier[next];
+  const reference = from !== undefined && to !== undefined ? (to.plan.totals.ksiAvoided - from.plan.totals.ksiAvoided) / ((to.budget - from.budget) / MILLION) : null;
   const partial = frontier.map((level, index) => {
     const previous = index > 0 ? frontier[index - 1] : undefined;
     const rise = previous === undefined ? 0 : level.budget - previous.budget;
     // A level with no list (infeasible below the must-fund cost, or unsolved) has no rate to or from it.
     const comparable = previous !== undefined && isSolved(previous) && isSolved(level);
     const marginal = comparable && rise > 0 ? (level.plan.totals.ksiAvoided - previous.plan.totals.ksiAvoided) / (rise / MILLION) : null;
-    if (reference === null && marginal !== null) reference = marginal;
     const { totals } = level.plan;
     return {
       budget: level.budget,
@@ -77,7 +87,7 @@ export function summariseFrontier(frontier: readonly FrontierLevel[]): FrontierS
     if (!row.diminishing) break;
     diminishingFrom = rows[index - 1]!.budget;
   }
-  return { rows, referenceKsiPerMillion: ref, diminishingFrom };
+  return { rows, referenceKsiPerMillion: ref, referenceFromBudget: from !== undefined && to !== undefined ? from.budget : null, referenceToBudget: to?.budget ?? null, diminishingFrom };
 }
 
 function isSolved(level: FrontierLevel): boolean {

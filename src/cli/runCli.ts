@@ -4,6 +4,7 @@ import { InputError, formatProblem } from "../io/InputError.js";
 import { forgetRunInputs } from "../io/runInputs.js";
 import type { CliIo } from "./CliIo.js";
 import { terminalSafeText } from "./terminalSafeText.js";
+import type { CommandOutcome } from "./solveExitCode.js";
 import { registerCheckCommand } from "./commands/checkCommand.js";
 import { registerCompareCommand } from "./commands/compareCommand.js";
 import { registerFrontierCommand } from "./commands/frontierCommand.js";
@@ -14,13 +15,16 @@ import { registerReportCommand } from "./commands/reportCommand.js";
 import { registerScreenCommand } from "./commands/screenCommand.js";
 import { registerTallyCommand } from "./commands/tallyCommand.js";
 
-/** Exit codes: 0 success, 1 internal fault, 2 bad input or usage. */
+/**
+ * Exit codes: 0 success, 1 internal fault, 2 bad input or usage; 3 no feasible list and 4 no list
+ * solved (EXIT_INFEASIBLE, EXIT_NOT_SOLVED in solveExitCode.ts), set by the commands that solve.
+ */
 export const EXIT_OK = 0;
 export const EXIT_FAULT = 1;
 export const EXIT_BAD_INPUT = 2;
 
-/** Builds the command tree; every command writes through `io`. */
-export function createProgram(io: CliIo): Command {
+/** Builds the command tree; every command writes through `io`, and solving commands set `outcome`. */
+export function createProgram(io: CliIo, outcome: CommandOutcome = { exitCode: EXIT_OK }): Command {
   const program = new Command("averta")
     .description("Choose the road-safety capital list that avoids the most K+A crashes (KSI crashes: a fatality or a serious injury; crashes, not people) within budget.")
     .version("0.1.0")
@@ -29,11 +33,11 @@ export function createProgram(io: CliIo): Command {
     .configureOutput({ writeOut: io.stdout, writeErr: io.stderr })
     .exitOverride();
   registerCheckCommand(program, io);
-  registerPlanCommand(program, io);
-  registerUncertaintyCommand(program, io);
-  registerReportCommand(program, io);
-  registerFrontierCommand(program, io);
-  registerCompareCommand(program, io);
+  registerPlanCommand(program, io, outcome);
+  registerUncertaintyCommand(program, io, outcome);
+  registerReportCommand(program, io, outcome);
+  registerFrontierCommand(program, io, outcome);
+  registerCompareCommand(program, io, outcome);
   registerTallyCommand(program, io);
   registerInitCommand(program, io);
   registerScreenCommand(program, io);
@@ -55,13 +59,14 @@ export async function runCli(argv: readonly string[], rawIo: CliIo): Promise<num
     stderr: (text) => rawIo.stderr(text.startsWith("\r") ? `\r${terminalSafeText(text.slice(1))}` : terminalSafeText(text)),
     stderrIsTty: rawIo.stderrIsTty,
   };
-  const program = createProgram(io);
+  const outcome: CommandOutcome = { exitCode: EXIT_OK };
+  const program = createProgram(io, outcome);
   // Each run starts with no inputs read and the default path policy (tests run many in one process).
   forgetRunInputs();
   allowOutsideFiles(false);
   try {
     await program.parseAsync([...argv], { from: "user" });
-    return EXIT_OK;
+    return outcome.exitCode;
   } catch (error) {
     if (error instanceof InputError) {
       io.stderr(error.problems.map((problem) => `error: ${formatProblem(problem)}`).join("\n") + "\n");

@@ -21,6 +21,7 @@ import type {
   UncertaintySettings,
 } from "../model/types.js";
 import { allowedInputPath } from "./allowedInputPath.js";
+import { checkAlternativeCounts } from "./checkAlternativeCounts.js";
 import { checkScenarioReferences } from "./checkScenarioReferences.js";
 import { InputError, type InputProblem } from "./InputError.js";
 import { loadCatalogue, type LoadedCatalogue } from "./loadCatalogue.js";
@@ -158,6 +159,8 @@ export function loadScenarioSource(source: YamlSource, file: string): LoadedScen
   if (problems.length > 0) throw new InputError(problems);
 
   const scenario = toScenario(raw, catalogue);
+  const tooMany = checkAlternativeCounts(scenario, raw, source, sitesSource);
+  if (tooMany.length > 0) throw new InputError(tooMany);
   return { scenario, source, sitesSource, catalogues, warnings: scenarioWarnings(scenario, raw, source, catalogues, sitesSource), notes: scenarioNotes(raw, source, sitesSource) };
 }
 

@@ -112,6 +112,11 @@ function describe(error: ErrorObject, source: YamlSource): InputProblem {
         message: `repeats an item (positions ${String(params.j)} and ${String(params.i)})`,
         hint: "list each item once",
       };
+    case "not": {
+      // A "not" rule carries its own words: what is wrong as its description, how to fix it as its hint.
+      const rule = error.schema as { description?: string; hint?: string } | undefined;
+      return { ...base, ...at(path), message: rule?.description ?? "is not allowed here", hint: rule?.hint ?? description ?? "see the schema in averta's schema folder" };
+    }
     case "minProperties":
     case "maxProperties":
       return { ...base, ...at(path), message: `has the wrong number of fields`, hint: description ?? "check which fields this entry needs" };

@@ -1,7 +1,10 @@
+import { countTreatmentSets } from "./countTreatmentSets.js";
+import { MAX_ALTERNATIVES_PER_SITE, MAX_ALTERNATIVES_TOTAL } from "./countAlternatives.js";
 import { enumerateTreatmentSets } from "./enumerateTreatmentSets.js";
 import { evaluateAlternative } from "./evaluateAlternative.js";
 import type { SiteBaseline } from "./siteBaselines.js";
-import type { Alternative, Scenario, Site, Treatment } from "./types.js";
+import { siteTreatmentSetRules } from "./siteTreatmentSetRules.js";
+import type { Alternative, Scenario, Site } from "./types.js";
 
 /** A site with the alternatives the optimiser may choose from. */
 export interface SiteAlternatives {
@@ -16,29 +19,35 @@ export interface SiteAlternatives {
 /**
  * Every site's alternatives: the combinations its candidates allow under exclusivity, the
  * per-site limit and the must-fund / never-fund rules, each evaluated against the site's baseline.
+ * The sets are counted before any is built: more than MAX_ALTERNATIVES_PER_SITE at a site or
+ * MAX_ALTERNATIVES_TOTAL in all is a RangeError (the loader refuses such scenarios first, with
+ * the site's line), so no scenario can exhaust memory here.
  */
 export function buildAlternatives(scenario: Scenario, baselines: readonly SiteBaseline[]): SiteAlternatives[] {
   const treatments = new Map(scenario.catalogue.treatments.map((t) => [t.id, t]));
   const baselineBySite = new Map(baselines.map((baseline) => [baseline.site, baseline]));
-  return scenario.sites.map((site) => {
-    const mustFund = scenario.rules.find((rule) => rule.kind === "must-fund" && rule.site === site.id);
-    const neverFund = scenario.rules.filter((rule) => rule.kind === "never-fund" && rule.site === site.id);
-    if (neverFund.some((rule) => rule.kind === "never-fund" && rule.treatments.length === 0)) {
+  const rules = scenario.sites.map((site) => siteTreatmentSetRules(scenario, site, treatments));
+  let total = 0;
+  rules.forEach((rule, index) => {
+    if (rule.excludedBy !== undefined) return;
+    const count = countTreatmentSets(rule.candidates, rule.limits);
+    if (count > MAX_ALTERNATIVES_PER_SITE) throw new RangeError(`site ${scenario.sites[index]!.id} has ${count} alternatives, more than ${MAX_ALTERNATIVES_PER_SITE}`);
+    total += count;
+  });
+  if (total > MAX_ALTERNATIVES_TOTAL) throw new RangeError(`the sites have ${total} alternatives in all, more than ${MAX_ALTERNATIVES_TOTAL}`);
+  return scenario.sites.map((site, index) => {
+    const rule = rules[index]!;
+    if (rule.excludedBy !== undefined) {
       // A must-fund rule on the same site stays required, so the solver reports the conflict instead of hiding it.
-      return { site, alternatives: [], required: mustFund !== undefined, excludedBy: "never-fund rule" };
+      return { site, alternatives: [], required: rule.required, excludedBy: rule.excludedBy };
     }
-    const candidates = site.candidates.map((id) => treatments.get(id)).filter((t): t is Treatment => t !== undefined);
-    const sets = enumerateTreatmentSets(candidates, {
-      maxTreatments: scenario.maxTreatmentsPerSite,
-      required: mustFund?.kind === "must-fund" ? mustFund.treatments : [],
-      forbidden: neverFund.flatMap((rule) => (rule.kind === "never-fund" ? rule.treatments : [])),
-    });
+    const sets = enumerateTreatmentSets(rule.candidates, rule.limits);
     const baseline = baselineBySite.get(site.id);
     if (!baseline) throw new RangeError(`no baseline for site ${site.id}`);
     return {
       site,
       alternatives: sets.map((set) => evaluateAlternative(site, set, baseline.expectedPerYear, scenario.economics, undefined, baseline.crashGrowthPerYear)),
-      required: mustFund !== undefined,
+      required: rule.required,
     };
   });
 }

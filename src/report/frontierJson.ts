@@ -13,7 +13,10 @@ export function frontierJson(summary: FrontierSummary, context: FrontierContext)
     scenarioBudget: context.scenarioBudget,
     marginalRateDefinition: `marginalKsiPerMillion: K+A crashes avoided gained per extra 1,000,000 ${context.currency} of budget since the previous level`,
     referenceKsiPerMillion: summary.referenceKsiPerMillion,
-    referenceDefinition: "the marginal rate of the first rising budget step (the 'first 1M')",
+    referenceFromBudget: summary.referenceFromBudget,
+    referenceToBudget: summary.referenceToBudget,
+    referenceDefinition:
+      "the 'first 1M' rate, measured from the first feasible level: K+A crashes avoided per extra 1,000,000 from the lowest budget level with a list (referenceFromBudget) to the next higher level with a list (referenceToBudget); levels below the must-fund sites' cost have no list and are skipped",
     diminishingFrom: summary.diminishingFrom,
     levels: summary.rows.map((row) => ({
       budget: row.budget,

@@ -39,10 +39,10 @@ export function frontierTable(summary: FrontierSummary, context: FrontierContext
     table,
     `K+A crashes avoided per extra 1M ${currency} = (K+A crashes avoided at this level − at the previous level) ÷ (budget step in millions of ${currency}).`,
     reference === null
-      ? "No rising budget step, so no diminishing-returns reading."
-      : `"First 1M" = the first step's rate, ${formatFixed(reference, 2)} K+A crashes avoided per extra 1M ${currency}; "< half" marks steps that buy less than half of it.`,
+      ? "Fewer than two budget levels have a list, so no diminishing-returns reading."
+      : `"First 1M" = ${formatFixed(reference, 2)} K+A crashes avoided per extra 1M ${currency}, the rate from ${formatMoney(summary.referenceFromBudget!)} (the lowest budget with a list) to ${formatMoney(summary.referenceToBudget!)} ${currency}; "< half" marks steps that buy less than half of it.`,
     summary.diminishingFrom === null
-      ? "No point past which every further step buys less than half the first step's rate."
+      ? "No point past which every further step buys less than half the first 1M's rate."
       : `Past ${formatMoney(summary.diminishingFrom)} ${currency}, every further 1M buys less than half of what the first 1M bought.`,
     "",
     "Cautions:",

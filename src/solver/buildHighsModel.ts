@@ -20,13 +20,16 @@ export interface HighsModelRestriction {
  * Builds the programme as a HiGHS model in compressed sparse columns (about 3-4x faster to
  * load than LP text, as we measured): one 0-1 column per option, row 0 the
  * budget, rows 1..G "at most one (exactly one if required)" per group, then one row per side
- * constraint. `integer` false gives the LP relaxation.
+ * constraint, then one "no-good" row per excluded choice: sum of its chosen columns minus the
+ * sum of all others <= (number chosen) - 1, which cuts off exactly that 0-1 point and no other.
+ * `integer` false gives the LP relaxation.
  */
 export function buildHighsModel(
   highs: Highs,
   programme: Programme,
   integer: boolean,
   restriction?: HighsModelRestriction,
+  excluded: readonly (readonly (number | null)[])[] = [],
 ): HighsModel {
   const { groups, constraints } = programme;
   const columnGroup: number[] = [];
@@ -53,11 +56,15 @@ export function buildHighsModel(
         indices.push(1 + groups.length + k);
         values.push(coefficient);
       });
+      excluded.forEach((choice, e) => {
+        indices.push(1 + groups.length + constraints.length + e);
+        values.push(choice[g] === a ? 1 : -1);
+      });
       starts.push(indices.length);
     });
   });
   const numCols = columnGroup.length;
-  const numRows = 1 + groups.length + constraints.length;
+  const numRows = 1 + groups.length + constraints.length + excluded.length;
   const rowLower: number[] = [-highs.infinity];
   const rowUpper: number[] = [programme.budget];
   groups.forEach((group, g) => {
@@ -67,6 +74,10 @@ export function buildHighsModel(
   for (const constraint of constraints) {
     rowLower.push(constraint.sense === ">=" ? constraint.rhs : -highs.infinity);
     rowUpper.push(constraint.sense === "<=" ? constraint.rhs : highs.infinity);
+  }
+  for (const choice of excluded) {
+    rowLower.push(-highs.infinity);
+    rowUpper.push(choice.filter((a) => a !== null).length - 1);
   }
   const data: ModelData = {
     numCols,

@@ -107,20 +107,11 @@ export function prepareProgramme(programme: Programme, options: Partial<SolveOpt
     if (change.values !== undefined || change.constraints !== undefined || change.budget !== undefined) {
       validateProgramme(target);
     }
-    const engines: readonly ConcreteEngine[] =
-      settings.engine !== "auto"
-        ? [settings.engine]
-        : target.constraints.length === 0
-          ? ["exact", "lp-solver"]
-          : ["exact", "highs", "lp-solver"];
+    // One engine per solve, never a silent second one: an answer says which engine gave it.
+    const engine: ConcreteEngine = settings.engine === "auto" ? "exact" : settings.engine;
     const reason = diagnoseInfeasibility(target);
-    if (reason !== undefined) return emptySolution(target, engines[0]!, "infeasible", reason);
-    let last: Solution | undefined;
-    for (const engine of engines) {
-      last = verifyEngineResult(target, engine, await runEngine(engine, target));
-      if (last.status !== "not-solved") return last;
-    }
-    return last!;
+    if (reason !== undefined) return emptySolution(target, engine, "infeasible", reason);
+    return verifyEngineResult(target, engine, await runEngine(engine, target));
   };
 
   return {

@@ -1,4 +1,5 @@
 import type { Highs, ModelData } from "highs";
+import { FEASIBILITY_RELATIVE_TOLERANCE } from "./checkSolution.js";
 
 /** What one HiGHS run left behind, copied out before the model is disposed. */
 export interface HighsRun {
@@ -23,9 +24,18 @@ export interface HighsRunSettings {
 }
 
 /**
+ * HiGHS's primal and MIP feasibility tolerances: the relative slack `checkSolution` allows
+ * (1e-9 of a row's magnitude, never less than 1e-9), so that HiGHS's own defaults (1e-7 on rows,
+ * 1e-6 on integrality) cannot hand back a programme that breaks a rule by more than the check
+ * accepts. Near a rule with right-hand side 0 (a K+A share floor) the defaults let HiGHS exploit
+ * the slack; what still slips through is caught by the check and cut off by the caller.
+ */
+export const HIGHS_FEASIBILITY_TOLERANCE = FEASIBILITY_RELATIVE_TOLERANCE;
+
+/**
  * Runs HiGHS on one model and always disposes it. Options: no output, the given gaps and time
  * limit (HiGHS can overrun its time limit during set-up on very large models; callers that need
- * a hard stop run it in a worker thread).
+ * a hard stop run it in a worker thread), and feasibility tolerances of 1e-9.
  */
 export function runHighs(highs: Highs, data: ModelData, settings: HighsRunSettings): HighsRun {
   const model = highs.createModel(data);
@@ -35,6 +45,8 @@ export function runHighs(highs: Highs, data: ModelData, settings: HighsRunSettin
       mip_rel_gap: settings.relativeGap,
       mip_abs_gap: settings.absoluteGap,
       time_limit: Math.max(0.001, settings.timeLimitSeconds),
+      primal_feasibility_tolerance: HIGHS_FEASIBILITY_TOLERANCE,
+      mip_feasibility_tolerance: HIGHS_FEASIBILITY_TOLERANCE,
     });
     if (settings.start !== undefined) model.setSolution({ colValue: settings.start });
     const { modelStatus } = model.run();

@@ -1,13 +1,27 @@
 import type { Highs } from "highs";
 import { buildHighsModel, type HighsModel } from "./buildHighsModel.js";
+import { NO_OPTION } from "./buildGroupHull.js";
 import { checkSolution } from "./checkSolution.js";
 import { readHighsChoice } from "./readHighsChoice.js";
 import { runHighs } from "./runHighs.js";
+import { HALF_LIMIT, searchCoreByHalves, type CoreSearch, type CoreSearchResult } from "./searchCoreByHalves.js";
 import { OPTIMALITY_TOLERANCE } from "./solveSingleBudget.js";
 import type { EngineResult, Programme, SolveOptions } from "./types.js";
 
 /** First guess at how far (relative to the bound) a useful option's reduced value may fall. */
 const FIRST_THRESHOLD = 1e-5;
+
+/**
+ * How many HiGHS answers that fail `checkSolution` (HiGHS accepted them within its own tolerance)
+ * are cut off and re-solved before the engine stops with the best verified programme it holds.
+ */
+export const MAX_REJECTED_ANSWERS = 20;
+
+/** Groups with exactly tied choices from which the restriction counts as a subset-sum and gets the halves search on a part. */
+const MIN_TIED_GROUPS = 4;
+
+/** Largest half listed when no subset-sum is suspected: cheap next to a HiGHS run. */
+const SMALL_HALF_LIMIT = 1 << 12;
 
 /**
  * The exact engine for programmes with side constraints (caps, floors, shares, counts):
@@ -16,16 +30,32 @@ const FIRST_THRESHOLD = 1e-5;
  * 2. The Lagrangian bound U = sum_k mu_k rhs_k + sum_g max_a (value - sum_k mu_k coef_k), valid for
  *    any mu >= 0 and equal to the LP optimum at the LP duals. A programme using an option whose
  *    reduced value falls d below its group's best is worth at most U - d.
- * 3. A restricted MIP keeps only options with d <= delta (most groups keep one) and is solved by
- *    HiGHS with gap 0, warm-started from the best programme so far. If its optimum z satisfies
- *    U - z <= delta, no dropped option can do better and z is proven optimal; otherwise delta
- *    grows (tenfold at most, never past U - z, where the next solve is exact for certain).
- *    An infeasible restriction widens delta tenfold, up to the whole programme.
- * The restricted models are a few percent of the full one, which is where the speed comes from.
+ * 3. A restriction keeps only options with d <= delta (most groups keep one). When the groups left
+ *    with a choice have at most about 2^36 programmes between them, the restriction is searched
+ *    exhaustively by halves (`searchCoreByHalves`): a binding K+A share floor with K+A as the
+ *    objective ties every option outside its scope and turns the restriction into a subset-sum
+ *    that branch and bound cannot close. Otherwise HiGHS solves it with gap 0, warm-started from
+ *    the best programme so far; when four or more groups tie exactly, a short first HiGHS run is
+ *    followed by the halves search on the groups that move the binding row most, to improve that
+ *    programme, before HiGHS goes on. If the restriction's optimum
+ *    z satisfies U - z <= delta, no dropped option can do better and z is proven optimal;
+ *    otherwise delta grows (tenfold at most, never past U - z, where the next pass is exact for
+ *    certain). An infeasible restriction widens delta tenfold, up to the whole programme.
+ * Every programme is verified with `checkSolution` before it counts. One that HiGHS accepted within
+ * its own tolerance but that fails the check is cut off by a no-good row and the restriction
+ * solved again; a verified incumbent is never dropped: if the search must stop (time limit, too
+ * many rejected answers, an engine failure), it is returned as `time-limit` with a valid bound.
  */
-export function solveWithSideConstraints(highs: Highs, programme: Programme, settings: Required<SolveOptions>): EngineResult {
+export function solveWithSideConstraints(
+  highs: Highs,
+  programme: Programme,
+  settings: Required<SolveOptions>,
+  // Replaceable so tests can send every restriction to HiGHS.
+  coreSearch: (search: CoreSearch) => CoreSearchResult = searchCoreByHalves,
+): EngineResult {
   const started = Date.now();
-  const secondsLeft = (): number => settings.timeLimitSeconds - (Date.now() - started) / 1000;
+  const deadline = started + settings.timeLimitSeconds * 1000;
+  const secondsLeft = (): number => (deadline - Date.now()) / 1000;
   const { groups, constraints, budget } = programme;
   const none = groups.map(() => null);
 
@@ -66,10 +96,46 @@ export function solveWithSideConstraints(highs: Highs, programme: Programme, set
   });
   const scale = Math.max(1, Math.abs(upper));
   const tolerance = Math.max(OPTIMALITY_TOLERANCE, settings.relativeGap) * scale;
+  const rowMultipliers = [budgetMultiplier, ...multipliers];
+  // Groups where two or more choices tie exactly at the LP multipliers: the subset-sum signature.
+  const tie = 1e-9 * scale;
+  const tiedGroups = groups.filter((group, g) => reduced[g]!.filter((r) => best[g]! - r <= tie).length + (!group.required && best[g]! <= tie ? 1 : 0) >= 2).length;
+  const degenerate = tiedGroups >= MIN_TIED_GROUPS;
 
   let threshold = FIRST_THRESHOLD * scale;
   let incumbent: { choice: (number | null)[]; objective: number } | undefined;
+  // Proven bound on programmes inside the current restriction, when a pass stops unfinished.
+  let restrictedBound = Number.POSITIVE_INFINITY;
+  const rejected: (number | null)[][] = [];
+  let slicedAt = Number.NaN;
+  const accept = (choice: (number | null)[]): boolean => {
+    const check = checkSolution(programme, choice);
+    if (check.feasible && (incumbent === undefined || check.objective > incumbent.objective)) {
+      incumbent = { choice, objective: check.objective };
+    }
+    return check.feasible;
+  };
+  // Stopping early: the best verified programme, with the LP bound tightened by what the pass proved.
+  const stop = (why: string): EngineResult => {
+    if (incumbent === undefined) {
+      return { status: "not-solved", choice: none, bound: upper, budgetMarginalValue: budgetMultiplier, diagnosis: `No feasible programme was found before the search stopped (${why}).` };
+    }
+    const outside = Number.isFinite(threshold) ? upper - threshold : Number.NEGATIVE_INFINITY;
+    const bound = Math.max(incumbent.objective, Math.min(upper, Math.max(restrictedBound, outside)));
+    return { status: "time-limit", choice: incumbent.choice, bound, budgetMarginalValue: budgetMultiplier, diagnosis: `The search stopped before the optimum was proven (${why}); the best verified programme is reported with its bound.` };
+  };
+  const proven = (bound: number): EngineResult => ({
+    status: "optimal",
+    choice: incumbent!.choice,
+    bound: Math.max(incumbent!.objective, bound),
+    budgetMarginalValue: budgetMultiplier,
+  });
+
   for (;;) {
+    restrictedBound = Number.POSITIVE_INFINITY;
+    if (secondsLeft() <= 0) return stop("time limit");
+    // Only options within U - z of their group's best can be in a programme better than the incumbent z.
+    if (incumbent !== undefined && upper - incumbent.objective + tolerance < threshold) threshold = upper - incumbent.objective + tolerance;
     const widest = !Number.isFinite(threshold);
     // The incumbent's options always stay, so every restriction contains the best programme so far.
     const held = incumbent?.choice;
@@ -77,44 +143,129 @@ export function solveWithSideConstraints(highs: Highs, programme: Programme, set
       group.options.map((_, a) => held?.[g] === a || best[g]! - reduced[g]![a]! <= threshold),
     );
     const mustPick = groups.map((group, g) => !group.required && best[g]! > threshold && (held === undefined || held[g] !== null));
-    const model = buildHighsModel(highs, programme, true, { keep, mustPick });
+    const choices = groups.map((group, g) => {
+      const kept = group.options.flatMap((_, a) => (keep[g]![a] ? [a] : []));
+      return group.required || mustPick[g] ? kept : [NO_OPTION, ...kept];
+    });
+    const sortRow = bindingRow(programme, choices, rowMultipliers);
+
+    // 1. The whole restriction by halves, when it is small enough.
+    // Without ties HiGHS does well, so only small restrictions are listed, and only while a proof is in reach.
+    const exhaustive = coreSearch({
+      programme,
+      choices,
+      sortRow,
+      floor: incumbent?.objective ?? Number.NEGATIVE_INFINITY,
+      tolerance,
+      deadline,
+      halfLimit: degenerate ? HALF_LIMIT : SMALL_HALF_LIMIT,
+      keepLooking: degenerate,
+    });
+    let verifiedAll = true;
+    if (exhaustive.choice !== undefined) verifiedAll = accept(exhaustive.choice);
+    if (exhaustive.status === "complete" && verifiedAll) {
+      if (incumbent === undefined) {
+        if (widest) return { status: "infeasible", choice: none, bound: Number.NaN, budgetMarginalValue: budgetMultiplier };
+        threshold = threshold * 10 > scale ? Number.POSITIVE_INFINITY : threshold * 10;
+        continue;
+      }
+      // Any programme using a dropped option is worth less than U - threshold.
+      if (widest || upper - incumbent.objective <= threshold) return proven(incumbent.objective);
+      threshold = Math.min(upper - incumbent.objective + tolerance, threshold * 10);
+      continue;
+    }
+
+    // 2. HiGHS on the restriction. With ties, a short first run: if it does not finish, the halves
+    // search improves its programme on the groups that move the binding row most (which narrows the
+    // restriction) before HiGHS goes on.
+    const model = buildHighsModel(highs, programme, true, { keep, mustPick }, rejected);
+    const slice = degenerate && exhaustive.status === "too-large" && slicedAt !== threshold;
+    if (slice) slicedAt = threshold;
+    const runSeconds = slice ? Math.min(secondsLeft(), Math.max(1, secondsLeft() / 10)) : secondsLeft();
     const run = runHighs(highs, model.data, {
-      timeLimitSeconds: secondsLeft(),
+      timeLimitSeconds: runSeconds,
       relativeGap: settings.relativeGap,
       absoluteGap: tolerance,
       ...(incumbent === undefined ? {} : { start: startingPoint(model, incumbent.choice) }),
     });
     const choice = readHighsChoice(model, run.colValue, groups.length);
-    let verified = false;
-    if (choice !== undefined && run.status !== "failed") {
-      const check = checkSolution(programme, choice);
-      verified = check.feasible;
-      if (check.feasible && (incumbent === undefined || check.objective > incumbent.objective)) {
-        incumbent = { choice, objective: check.objective };
-      }
+    if (choice !== undefined && run.status !== "failed" && !accept(choice)) {
+      // HiGHS accepted it within its tolerance; the check did not: cut off exactly this point and solve again.
+      rejected.push(choice);
+      if (rejected.length > MAX_REJECTED_ANSWERS) return stop(`${rejected.length} HiGHS answers broke a rule by more than the 1e-9 tolerance`);
+      continue;
     }
-    if (run.status === "time-limit" || run.status === "failed" || secondsLeft() <= 0) {
-      if (incumbent === undefined) {
-        return { status: "not-solved", choice: none, bound: upper, budgetMarginalValue: budgetMultiplier, diagnosis: `No feasible programme was found before the time limit (${run.detail}).` };
+    if (run.status === "failed") return stop(run.detail);
+    if (run.status === "time-limit") {
+      if (Number.isFinite(run.bound)) restrictedBound = run.bound;
+      if (!slice || secondsLeft() <= 0) return stop("time limit");
+      if (incumbent !== undefined) {
+        const focused = focusChoices(programme, choices, incumbent.choice, sortRow);
+        const improved = coreSearch({ programme, choices: focused, sortRow, floor: incumbent.objective, tolerance, deadline });
+        if (improved.choice !== undefined) accept(improved.choice);
       }
-      return { status: "time-limit", choice: incumbent.choice, bound: upper, budgetMarginalValue: budgetMultiplier };
+      continue;
     }
     if (run.status === "infeasible") {
       if (widest) return { status: "infeasible", choice: none, bound: Number.NaN, budgetMarginalValue: budgetMultiplier };
       threshold = threshold * 10 > scale ? Number.POSITIVE_INFINITY : threshold * 10;
       continue;
     }
-    if (!verified || incumbent === undefined) {
-      return { status: "not-solved", choice: none, bound: upper, budgetMarginalValue: budgetMultiplier, diagnosis: "HiGHS returned a programme that failed verification." };
-    }
+    if (choice === undefined || incumbent === undefined) return stop("HiGHS gave no usable programme");
     // Any programme using a dropped option is worth less than U - threshold.
-    if (widest || upper - incumbent.objective <= threshold) {
-      const bound = Math.max(incumbent.objective, Number.isFinite(run.bound) ? run.bound : incumbent.objective);
-      return { status: "optimal", choice: incumbent.choice, bound, budgetMarginalValue: budgetMultiplier };
-    }
+    if (widest || upper - incumbent.objective <= threshold) return proven(Number.isFinite(run.bound) ? run.bound : incumbent.objective);
     // Widen step by step: each solve improves the incumbent, which keeps the next restriction small.
     threshold = Math.min(upper - incumbent.objective + tolerance, threshold * 10);
   }
+}
+
+// The row the halves search matches on: the one whose multiplier times its spread over the
+// restriction's choices is largest (the binding row that decides the fill); the budget when none binds.
+function bindingRow(programme: Programme, choices: readonly (readonly number[])[], rowMultipliers: readonly number[]): number {
+  let bestRow = 0;
+  let bestScore = 0;
+  rowMultipliers.forEach((mu, r) => {
+    if (mu <= 0) return;
+    let spread = 0;
+    choices.forEach((allowed, g) => {
+      if (allowed.length < 2) return;
+      let low = Number.POSITIVE_INFINITY;
+      let high = Number.NEGATIVE_INFINITY;
+      for (const a of allowed) {
+        const x = a === NO_OPTION ? 0 : r === 0 ? programme.groups[g]!.options[a]!.cost : (programme.constraints[r - 1]!.coefficients[g]?.[a] ?? 0);
+        low = Math.min(low, x);
+        high = Math.max(high, x);
+      }
+      spread += high - low;
+    });
+    if (mu * spread > bestScore) {
+      bestScore = mu * spread;
+      bestRow = r;
+    }
+  });
+  return bestRow;
+}
+
+// The restriction with every group held at the incumbent's choice except those that move the sort
+// row most, as many as fit in two halves of HALF_LIMIT programmes (split as `searchCoreByHalves` splits).
+function focusChoices(programme: Programme, choices: readonly (readonly number[])[], held: readonly (number | null)[], sortRow: number): number[][] {
+  const use = (g: number, a: number): number =>
+    a === NO_OPTION ? 0 : sortRow === 0 ? programme.groups[g]!.options[a]!.cost : (programme.constraints[sortRow - 1]!.coefficients[g]?.[a] ?? 0);
+  const spread = choices.map((allowed, g) => {
+    const uses = allowed.map((a) => use(g, a));
+    return allowed.length < 2 ? 0 : Math.max(...uses) - Math.min(...uses);
+  });
+  const wanted = choices.map((_, g) => g).filter((g) => choices[g]!.length > 1).sort((x, y) => spread[y]! - spread[x]! || x - y);
+  const picked = new Set<number>();
+  const sizes = [1, 1];
+  // Largest first into the smaller half, as the search splits them; a group that fits in neither is left out.
+  for (const g of [...wanted].sort((x, y) => choices[y]!.length - choices[x]!.length || spread[y]! - spread[x]! || x - y)) {
+    const h = sizes[0]! <= sizes[1]! ? 0 : 1;
+    if (sizes[h]! * choices[g]!.length > HALF_LIMIT / 2) continue;
+    sizes[h] = sizes[h]! * choices[g]!.length;
+    picked.add(g);
+  }
+  return choices.map((allowed, g) => (picked.has(g) ? [...allowed] : [held[g] ?? NO_OPTION]));
 }
 
 // The incumbent as column values of a restricted model (its options are always kept there).

@@ -50,6 +50,10 @@ export interface Programme {
  */
 export type SolveStatus = "optimal" | "infeasible" | "time-limit" | "not-solved";
 
+/**
+ * Which engine solves: `auto` is the exact engine (no fallback to another one); `highs` and
+ * `lp-solver` hand the whole programme to a general MIP solver, for checking.
+ */
 export type EngineName = "auto" | "exact" | "lp-solver" | "highs";
 
 export interface SolveOptions {

@@ -48,6 +48,33 @@ describe("summariseFrontier", () => {
     const summary = summariseFrontier(frontier);
     expect(summary.rows[0]!.status).toBe("infeasible");
     expect(summary.rows.map((row) => row.marginalKsiPerMillion)).toEqual([null, null, 6]);
+    // The "first 1M" is measured from the first feasible level (1M, 2 KSI) to the next (2M, 8 KSI).
     expect(summary.referenceKsiPerMillion).toBe(6);
+    expect(summary.referenceFromBudget).toBe(1_000_000);
+    expect(summary.referenceToBudget).toBe(2_000_000);
+  });
+
+  it("measures the first 1M from the first feasible level over a level that was not solved", async () => {
+    const solved = await levels([0, 1_000_000, 2_000_000, 3_000_000]);
+    // Level 2M stands for an engine that gave no list: no rate to or from it, and the first 1M spans it.
+    const frontier = solved.map((level, index) =>
+      index === 2 ? { ...level, plan: { ...level.plan, solution: { ...level.plan.solution, status: "not-solved" as const } } } : level,
+    );
+    const summary = summariseFrontier(frontier);
+    expect(summary.rows.map((row) => row.marginalKsiPerMillion)).toEqual([null, 10, null, null]);
+    // From the first feasible level (0, 0 KSI) to the next with a list (1M, 10 KSI).
+    expect(summary.referenceKsiPerMillion).toBe(10);
+    const withoutFirst = summariseFrontier([{ ...frontier[0]!, plan: { ...frontier[0]!.plan, solution: { ...frontier[0]!.plan.solution, status: "infeasible" as const } } }, frontier[1]!, frontier[2]!, frontier[3]!]);
+    // Level 0 infeasible and level 2M unsolved: from 1M (10 KSI) to 3M (20 KSI), 10 KSI over 2M = 5 per 1M.
+    expect(withoutFirst.referenceKsiPerMillion).toBe(5);
+    expect([withoutFirst.referenceFromBudget, withoutFirst.referenceToBudget]).toEqual([1_000_000, 3_000_000]);
+  });
+
+  it("gives no first 1M when fewer than two levels have a list", async () => {
+    const [only] = await levels([1_000_000]);
+    const summary = summariseFrontier([only!]);
+    expect(summary.referenceKsiPerMillion).toBeNull();
+    expect([summary.referenceFromBudget, summary.referenceToBudget]).toEqual([null, null]);
+    expect(summary.diminishingFrom).toBeNull();
   });
 });

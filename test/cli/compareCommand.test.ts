@@ -61,7 +61,8 @@ describe("averta compare (smoke, demo scenario)", () => {
 
   it("says when one side has no list, and why, instead of showing it as an empty list", async () => {
     const table = await runCaptured(["compare", DEMO, "--budget", "0", "--budget", "5M"]);
-    expect(table.code).toBe(0);
+    // A side without a feasible list: exit 3 (README, "Exit codes, errors and limits").
+    expect(table.code).toBe(3);
     expect(table.stdout).toMatch(/Status\s+│\s+infeasible\s+│\s+optimal/);
     expect(table.stdout).toMatch(/No list in A: .*I-03/);
     const json = JSON.parse((await runCaptured(["compare", DEMO, "--budget", "0", "--budget", "5M", "--format", "json"])).stdout);

@@ -107,7 +107,8 @@ describe("averta plan on the demo", () => {
 
   it("must-fund items that alone exceed the budget are reported as infeasible with the shortfall", async () => {
     const { code, stdout } = await runCaptured(["plan", DEMO, "--budget", "10k", "--format", "json"]);
-    expect(code).toBe(0);
+    // No feasible list: exit 3 (README, "Exit codes, errors and limits").
+    expect(code).toBe(3);
     const plan = JSON.parse(stdout) as PlanJson & { diagnosis?: string; justification: unknown };
     expect(plan.status).toBe("infeasible");
     expect(plan.diagnosis).toMatch(/I-03/);

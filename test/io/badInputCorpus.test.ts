@@ -96,9 +96,12 @@ const CASES: readonly Case[] = [
   { name: "max-treatments-zero", code: "schema", line: 11, column: 23, path: "maxTreatmentsPerSite" },
   { name: "share-above-one", code: "schema", line: 14, column: 14, path: "rules.spendCaps[0].share" },
   { name: "spend-rule-both", code: "rule-amount", line: 13, column: 7, path: "rules.spendCaps[0]" },
+  { name: "spend-share-whole-programme", code: "schema", line: 13, column: 7, path: "rules.spendCaps[0]" },
+  { name: "ksi-share-no-scope", code: "schema", line: 13, column: 7, path: "rules.ksiShareFloors[0]" },
   { name: "assumed-cv-percent", code: "schema", line: 11, column: 30, path: "uncertainty.assumedCmfCv" },
   { name: "assumed-cv-word", code: "schema", line: 12, column: 17, path: "uncertainty.assumedCmfCv" },
   // sites
+  { name: "too-many-alternatives", code: "too-many-alternatives", line: 26, column: 17, path: "sites[1].candidates" },
   { name: "sites-empty", code: "schema", line: 11, column: 8, path: "sites" },
   { name: "sites-null", code: "schema", line: 11, column: 7, path: "sites" },
   // a sites file the scenario names (sites: <file>), and siteCandidates

@@ -16,6 +16,8 @@ const row = (budget: number, ksiAvoided: number, status: "optimal" | "infeasible
 const summary: FrontierSummary = {
   rows: [row(0, 0, "infeasible"), row(1e6, 10), row(2e6, 16), row(3e6, 20)],
   referenceKsiPerMillion: 6,
+  referenceFromBudget: 1e6,
+  referenceToBudget: 2e6,
   diminishingFrom: 2e6,
 };
 const context = { scenarioName: "Test <city> & co", currency: "USD", scenarioBudget: 1.5e6, objective: "ksi" as const };

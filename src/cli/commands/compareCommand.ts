@@ -11,6 +11,7 @@ import { compareTable, type CompareLabels } from "../../report/compareTable.js";
 import { formatMoney } from "../../report/formatNumber.js";
 import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
+import { solveExitCode, solveStatusNote, type CommandOutcome } from "../solveExitCode.js";
 import { parseAmountOption, parseChoiceOption } from "../parseOptionValues.js";
 import { ENGINES } from "./planCommand.js";
 
@@ -22,8 +23,11 @@ interface CompareOptions {
   engine: string;
 }
 
-/** `averta compare <scenario> --budget A --budget B` or `averta compare <scenarioA> <scenarioB>`: what changes between two lists. */
-export function registerCompareCommand(program: Command, io: CliIo): void {
+/**
+ * `averta compare <scenario> --budget A --budget B` or `averta compare <scenarioA> <scenarioB>`:
+ * what changes between two lists; exit 3 when a side has no feasible list, 4 when a side was not solved.
+ */
+export function registerCompareCommand(program: Command, io: CliIo, outcome: CommandOutcome): void {
   program
     .command("compare")
     .description("compare the optimal lists at two budgets, or of two scenarios: what enters, leaves or changes treatment")
@@ -61,6 +65,9 @@ export function registerCompareCommand(program: Command, io: CliIo): void {
       const content =
         format === "json" ? JSON.stringify(compareJson(comparison, labels), null, 2) + "\n" : format === "csv" ? compareCsv(comparison, labels) : compareTable(comparison, labels);
       emitOutput(io, content, options.out, options.force === true);
+      io.stderr(solveStatusNote(planA.solution.status, `A (${labels.a})`, planA.solution.diagnosis, planA.solution.gap));
+      io.stderr(solveStatusNote(planB.solution.status, `B (${labels.b})`, planB.solution.diagnosis, planB.solution.gap));
+      outcome.exitCode = solveExitCode([planA.solution.status, planB.solution.status]);
     });
 }
 

@@ -13,6 +13,7 @@ import { formatMoney } from "../../report/formatNumber.js";
 import { frontierTable, type FrontierContext } from "../../report/frontierTable.js";
 import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
+import { frontierExitCode, solveStatusNote, type CommandOutcome } from "../solveExitCode.js";
 import { parseAmountOption, parseChoiceOption, parseIntegerOption } from "../parseOptionValues.js";
 import { ENGINES, FORMATS } from "./planCommand.js";
 
@@ -27,8 +28,12 @@ interface FrontierOptions {
   engine: string;
 }
 
-/** `averta frontier <scenario>`: the optimal list's K+A crashes avoided, spend and B/C at a range of budgets. */
-export function registerFrontierCommand(program: Command, io: CliIo): void {
+/**
+ * `averta frontier <scenario>`: the optimal list's K+A crashes avoided, spend and B/C at a range of
+ * budgets. Infeasible levels are part of the result; exit 3 only when no level has a list, 4 when
+ * a level was not solved.
+ */
+export function registerFrontierCommand(program: Command, io: CliIo, outcome: CommandOutcome): void {
   program
     .command("frontier")
     .description("solve the programme at a range of budgets and show what each extra million buys")
@@ -77,5 +82,12 @@ export function registerFrontierCommand(program: Command, io: CliIo): void {
         io.stderr(`wrote ${options.chart}\n`);
       }
       emitOutput(io, content, options.out, force);
+      const statuses = frontier.map((level) => level.plan.solution.status);
+      outcome.exitCode = frontierExitCode(statuses);
+      for (const level of frontier) {
+        // Levels below the must-fund cost are expected to be infeasible; say so only when none has a list.
+        if (level.plan.solution.status === "infeasible" && outcome.exitCode === 0) continue;
+        io.stderr(solveStatusNote(level.plan.solution.status, `at ${formatMoney(level.budget)}`, level.plan.solution.diagnosis, level.plan.solution.gap));
+      }
     });
 }

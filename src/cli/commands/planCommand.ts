@@ -11,10 +11,12 @@ import { planJson } from "../../report/planJson.js";
 import { PLAN_TABLE_ROWS, planTable } from "../../report/planTable.js";
 import { justificationJson } from "../../report/justificationJson.js";
 import { hasList } from "../../report/hasList.js";
+import { formatMoney } from "../../report/formatNumber.js";
 import { justificationTable } from "../../report/justificationTable.js";
 import type { EngineName } from "../../solver/index.js";
 import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
+import { solveExitCode, solveStatusNote, type CommandOutcome } from "../solveExitCode.js";
 import { parseAmountOption, parseChoiceOption } from "../parseOptionValues.js";
 
 export const ENGINES: readonly EngineName[] = ["auto", "exact", "lp-solver", "highs"];
@@ -30,8 +32,8 @@ interface PlanOptions {
   all?: boolean;
 }
 
-/** `averta plan <scenario>`: the optimal capital list within the budget. */
-export function registerPlanCommand(program: Command, io: CliIo): void {
+/** `averta plan <scenario>`: the optimal capital list within the budget; exit 3 when infeasible, 4 when not solved. */
+export function registerPlanCommand(program: Command, io: CliIo, outcome: CommandOutcome): void {
   program
     .command("plan")
     .description("choose the treatments to fund that avoid the most K+A (fatal and serious-injury) crashes within the budget")
@@ -62,5 +64,8 @@ export function registerPlanCommand(program: Command, io: CliIo): void {
             ? planCsv(result)
             : planTable(result, planCase ? [justificationTable(planCase, { all: options.all })] : [], { all: options.all });
       emitOutput(io, content, options.out, options.force === true);
+      const { solution } = result;
+      io.stderr(solveStatusNote(solution.status, `within ${formatMoney(result.budget)}`, solution.diagnosis, solution.gap));
+      outcome.exitCode = solveExitCode([solution.status]);
     });
 }

@@ -15,7 +15,9 @@ import { reportHtml } from "../../report/html/reportHtml.js";
 import { planCsv } from "../../report/planCsv.js";
 import { progressBar } from "../../report/progressBar.js";
 import type { EngineName } from "../../solver/index.js";
+import { formatMoney } from "../../report/formatNumber.js";
 import type { CliIo } from "../CliIo.js";
+import { solveExitCode, solveStatusNote, type CommandOutcome } from "../solveExitCode.js";
 import { addDrawOptions, parseDrawOptions, type DrawOptions, type DrawOptionText } from "../drawOptions.js";
 import { parseAmountOption, parseChoiceOption, parseIntegerOption } from "../parseOptionValues.js";
 import { ENGINES } from "./planCommand.js";
@@ -34,7 +36,7 @@ interface ReportOptions extends DrawOptionText {
  * the budget frontier and slider, a map, the justification (reasons, thresholds, incremental B/C,
  * the B/C ranking comparison), robustness and sensitivity, assumptions, warnings and cautions.
  */
-export function registerReportCommand(program: Command, io: CliIo): void {
+export function registerReportCommand(program: Command, io: CliIo, outcome: CommandOutcome): void {
   const command = program
     .command("report")
     .description("write a self-contained HTML report of the optimal list for finance and approval")
@@ -86,6 +88,11 @@ export function registerReportCommand(program: Command, io: CliIo): void {
         writeOutputFile(options.csv, planCsv(plan), force, "--csv");
         io.stderr(`wrote ${options.csv}\n`);
       }
+      // The report rests on the list at its budget; a frontier level that was not solved leaves a hole in its chart.
+      io.stderr(solveStatusNote(plan.solution.status, `within ${formatMoney(budget)}`, plan.solution.diagnosis, plan.solution.gap));
+      const holes = frontier.filter((level) => level.plan.solution.status === "not-solved");
+      for (const level of holes) io.stderr(solveStatusNote("not-solved", `at ${formatMoney(level.budget)} on the budget chart`, level.plan.solution.diagnosis, Number.NaN));
+      outcome.exitCode = solveExitCode([plan.solution.status, ...holes.map((level) => level.plan.solution.status)]);
     });
 }
 

@@ -5,6 +5,7 @@ import { oneAtATimeSensitivity } from "../../analysis/uncertainty/oneAtATimeSens
 import { InputError } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
 import { checkDistinctOutputs, checkOutputTarget, writeOutputFile } from "../../io/writeOutputFile.js";
+import { formatMoney } from "../../report/formatNumber.js";
 import { progressBar } from "../../report/progressBar.js";
 import { tornadoSvg } from "../../report/tornadoSvg.js";
 import { uncertaintyCsv } from "../../report/uncertaintyCsv.js";
@@ -12,6 +13,7 @@ import { uncertaintyJson } from "../../report/uncertaintyJson.js";
 import { uncertaintyTable } from "../../report/uncertaintyTable.js";
 import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
+import { solveExitCode, solveStatusNote, type CommandOutcome } from "../solveExitCode.js";
 import { addDrawOptions, parseDrawOptions, type DrawOptionText } from "../drawOptions.js";
 import { parseAmountOption, parseChoiceOption } from "../parseOptionValues.js";
 import { ENGINES } from "./planCommand.js";
@@ -29,7 +31,7 @@ interface UncertaintyCommandOptions extends DrawOptionText {
 }
 
 /** `averta uncertainty <scenario>`: how sure the chosen list is, under CMF and baseline uncertainty. */
-export function registerUncertaintyCommand(program: Command, io: CliIo): void {
+export function registerUncertaintyCommand(program: Command, io: CliIo, outcome: CommandOutcome): void {
   const command = program
     .command("uncertainty")
     .description("draw CMFs and baselines from their uncertainty: spread of the list's results, selection probabilities, regret, one-at-a-time sensitivity")
@@ -80,5 +82,8 @@ export function registerUncertaintyCommand(program: Command, io: CliIo): void {
         io.stderr(`wrote ${options.tornado}\n`);
       }
       emitOutput(io, content, options.out, force);
+      const { solution } = result.plan;
+      io.stderr(solveStatusNote(solution.status, `within ${formatMoney(result.plan.budget)}`, solution.diagnosis, solution.gap));
+      outcome.exitCode = solveExitCode([solution.status]);
     });
 }

@@ -150,7 +150,7 @@ describe("reading input", () => {
 
   it("names of built-in object properties are ordinary ids in every command", async () => {
     const file = "test/fixtures/good/prototype-names.yaml";
-    for (const argv of [["check", file], ["plan", file], ["plan", file, "--format", "csv"], ["screen", file], ["frontier", file, "--steps", "3"], ["compare", file, "--budget", "10k", "--budget", "25k"], ["uncertainty", file, "--draws", "10", "--threads", "1"]]) {
+    for (const argv of [["check", file], ["plan", file], ["plan", file, "--format", "csv"], ["screen", file], ["frontier", file, "--steps", "3"], ["compare", file, "--budget", "20k", "--budget", "25k"], ["uncertainty", file, "--draws", "10", "--threads", "1"]]) {
       const result = await runCaptured(argv);
       expect(result.code, `${argv.join(" ")}: ${result.stderr}`).toBe(0);
     }

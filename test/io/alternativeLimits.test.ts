@@ -5,9 +5,9 @@ import { parseYamlText } from "../../src/io/readYamlFile.js";
 
 // The per-site limit is covered by the bad-input corpus (too-many-alternatives.yaml); this is the total.
 describe("the limit on alternatives over all sites", () => {
-  it("refuses 125 sites of 40 combinable candidates, up to 2 each (820 a site, 102,500 in all), at the sites list", () => {
+  it("refuses 1,250 sites of 40 combinable candidates, up to 2 each (820 a site, 1,025,000 in all), at the sites list", () => {
     const candidates = Array.from({ length: 40 }, (_, i) => `t${String(i + 1).padStart(2, "0")}`).join(", ");
-    const sites = Array.from({ length: 125 }, (_, s) =>
+    const sites = Array.from({ length: 1250 }, (_, s) =>
       [`  - id: S-${s}`, `    name: Site ${s}`, "    kind: intersection", "    district: North", "    crashes: { angle: { A: 1 } }", `    candidates: [${candidates}]`].join("\n"),
     );
     const text = [
@@ -34,7 +34,7 @@ describe("the limit on alternatives over all sites", () => {
       problem = error.problems[0];
     }
     expect(problem).toMatchObject({ code: "too-many-alternatives", file, line: 11, path: "sites" });
-    expect(problem!.message).toContain("102,500 alternatives in all, more than the limit of 100,000");
+    expect(problem!.message).toContain("1,025,000 alternatives in all, more than the limit of 1,000,000");
     expect(problem!.hint).toMatch(/maxTreatmentsPerSite/);
   });
 });

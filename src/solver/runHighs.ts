@@ -3,6 +3,7 @@ import { FEASIBILITY_RELATIVE_TOLERANCE } from "./checkSolution.js";
 
 /** What one HiGHS run left behind, copied out before the model is disposed. */
 export interface HighsRun {
+  /** `time-limit`: stopped by the time, node or iteration limit before a proof. */
   readonly status: "optimal" | "infeasible" | "time-limit" | "failed";
   /** Column values; empty when HiGHS holds no feasible point. */
   readonly colValue: Float64Array;
@@ -21,6 +22,8 @@ export interface HighsRunSettings {
   readonly absoluteGap: number;
   /** A feasible 0-1 point to start the MIP search from (one value per column). */
   readonly start?: Float64Array;
+  /** Most branch-and-bound nodes (mip_max_nodes): a limit that, unlike time, gives the same answer on every machine. */
+  readonly maxNodes?: number;
 }
 
 /**
@@ -47,6 +50,7 @@ export function runHighs(highs: Highs, data: ModelData, settings: HighsRunSettin
       time_limit: Math.max(0.001, settings.timeLimitSeconds),
       primal_feasibility_tolerance: HIGHS_FEASIBILITY_TOLERANCE,
       mip_feasibility_tolerance: HIGHS_FEASIBILITY_TOLERANCE,
+      ...(settings.maxNodes === undefined ? {} : { mip_max_nodes: settings.maxNodes }),
     });
     if (settings.start !== undefined) model.setSolution({ colValue: settings.start });
     const { modelStatus } = model.run();
@@ -65,7 +69,7 @@ export function runHighs(highs: Highs, data: ModelData, settings: HighsRunSettin
     if (modelStatus === codes.infeasible || modelStatus === codes.unboundedOrInfeasible) {
       return { status: "infeasible", colValue: new Float64Array(0), rowDual, bound: Number.NaN, detail: "infeasible" };
     }
-    if (modelStatus === codes.timeLimit || modelStatus === codes.interrupted || modelStatus === codes.iterationLimit) {
+    if (modelStatus === codes.timeLimit || modelStatus === codes.interrupted || modelStatus === codes.iterationLimit || modelStatus === codes.solutionLimit) {
       return { status: "time-limit", colValue, rowDual, bound, detail: `stopped with model status ${modelStatus}` };
     }
     return { status: "failed", colValue, rowDual, bound: Number.NaN, detail: `HiGHS ended with model status ${modelStatus}` };

@@ -20,6 +20,9 @@ export const MAX_REJECTED_ANSWERS = 20;
 /** Groups with exactly tied choices from which the restriction counts as a subset-sum and gets the halves search on a part. */
 const MIN_TIED_GROUPS = 4;
 
+/** Branch-and-bound nodes of the short first HiGHS run on a restriction with ties (about a second). */
+const SLICE_NODES = 1_000;
+
 /** Largest half listed when no subset-sum is suspected: cheap next to a HiGHS run. */
 const SMALL_HALF_LIMIT = 1 << 12;
 
@@ -181,9 +184,10 @@ export function solveWithSideConstraints(
     const model = buildHighsModel(highs, programme, true, { keep, mustPick }, rejected);
     const slice = degenerate && exhaustive.status === "too-large" && slicedAt !== threshold;
     if (slice) slicedAt = threshold;
-    const runSeconds = slice ? Math.min(secondsLeft(), Math.max(1, secondsLeft() / 10)) : secondsLeft();
     const run = runHighs(highs, model.data, {
-      timeLimitSeconds: runSeconds,
+      timeLimitSeconds: secondsLeft(),
+      // Limited by nodes, not seconds, so the answer does not depend on the machine.
+      ...(slice ? { maxNodes: SLICE_NODES } : {}),
       relativeGap: settings.relativeGap,
       absoluteGap: tolerance,
       ...(incumbent === undefined ? {} : { start: startingPoint(model, incumbent.choice) }),

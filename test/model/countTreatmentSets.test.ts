@@ -2,7 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { buildAlternatives } from "../../src/model/buildAlternatives.js";
 import { countTreatmentSets } from "../../src/model/countTreatmentSets.js";
-import { countAlternatives, MAX_ALTERNATIVES_PER_SITE } from "../../src/model/countAlternatives.js";
+import { countAlternatives, MAX_ALTERNATIVES_PER_SITE, MAX_ALTERNATIVES_TOTAL } from "../../src/model/countAlternatives.js";
 import { enumerateTreatmentSets } from "../../src/model/enumerateTreatmentSets.js";
 import { siteBaselines } from "../../src/model/siteBaselines.js";
 import type { Scenario } from "../../src/model/types.js";
@@ -75,9 +75,10 @@ describe("buildAlternatives refuses before it builds", () => {
   });
 
   it("sites within the per-site limit but over the total limit are a RangeError too", () => {
-    // 40 candidates, up to 2 each: 820 per site, 125 sites: 102,500 in all.
-    const scenario = scenarioWith(40, 2, 125);
+    // 40 candidates, up to 2 each: 820 per site, 1,250 sites: 1,025,000 in all.
+    const scenario = scenarioWith(40, 2, 1250);
     expect(countAlternatives(scenario).every((n) => n === 820 && n <= MAX_ALTERNATIVES_PER_SITE)).toBe(true);
-    expect(() => buildAlternatives(scenario, siteBaselines(scenario))).toThrow(/102500 alternatives in all, more than 100000/);
+    expect(820 * 1250).toBeGreaterThan(MAX_ALTERNATIVES_TOTAL);
+    expect(() => buildAlternatives(scenario, siteBaselines(scenario))).toThrow(/1025000 alternatives in all, more than 1000000/);
   });
 });

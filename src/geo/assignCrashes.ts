@@ -3,6 +3,7 @@ import { buildSiteIndex, DEFAULT_GRID_LIMITS, type GridLimits, type SiteIndex } 
 import { metresPerDegree } from "./metresPerDegree.js";
 import { distanceToEdgeM } from "./distanceToEdgeM.js";
 import type { NetworkSite } from "./NetworkSite.js";
+import { positiveModulo } from "./positiveModulo.js";
 
 /** How far from a site a crash may lie and still belong to it. */
 export interface AssignOptions {
@@ -232,9 +233,4 @@ function occupiedCells(index: SiteIndex): Int32Array {
     }
   }
   return table;
-}
-
-function positiveModulo(value: number, modulus: number): number {
-  const result = value % modulus;
-  return result < 0 ? result + modulus : result;
 }

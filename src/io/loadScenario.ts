@@ -1,8 +1,6 @@
 import { dirname, isAbsolute, relative, resolve } from "node:path";
 import { completeCrashMatrix } from "../model/crashMatrix.js";
-import { estimateCalibrationFactor } from "../model/estimateCalibrationFactor.js";
 import { resolveCrashCosts, type StatedCrashCosts } from "../model/resolveCrashCosts.js";
-import { empiricalBayesGap } from "../model/siteBaselines.js";
 import type {
   AreaType,
   BaselineMethod,
@@ -12,15 +10,14 @@ import type {
   Objective,
   PolicyRule,
   RenewalRule,
-  SafetyPerformanceFunction,
   Scenario,
   Severity,
   Site,
   SiteKind,
-  SpfCalibration,
   UncertaintySettings,
 } from "../model/types.js";
 import { allowedInputPath } from "./allowedInputPath.js";
+import { calibrateCatalogue } from "./calibrateCatalogue.js";
 import { checkAlternativeCounts } from "./checkAlternativeCounts.js";
 import { checkScenarioReferences } from "./checkScenarioReferences.js";
 import { InputError, type InputProblem } from "./InputError.js";
@@ -177,7 +174,7 @@ function toScenario(raw: RawScenario, uncalibrated: Catalogue): Scenario {
   const ksiCosting = raw.economics.ksiCosting;
   const sites = raw.sites.map(toSite);
   const windowYears = raw.crashWindow.lastYear - raw.crashWindow.firstYear + 1;
-  const { catalogue, calibrations } = calibrate(uncalibrated, raw.calibration ?? {}, sites, windowYears);
+  const { catalogue, calibrations } = calibrateCatalogue(uncalibrated, raw.calibration ?? {}, sites, windowYears);
   const stated: StatedCrashCosts = {
     perCrash: { K: amount(costs.K), A: amount(costs.A), B: amount(costs.B), C: amount(costs.C), O: amount(costs.O) },
     source: costs.source,
@@ -214,33 +211,6 @@ function toScenario(raw: RawScenario, uncalibrated: Catalogue): Scenario {
     calibrations,
     ...(raw.uncertainty !== undefined && { uncertainty: raw.uncertainty }),
   };
-}
-
-/**
- * The catalogue with each calibrated SPF's factor set: a given number, or an estimate from the
- * scenario's own sites that name the SPF and have what it needs (see estimateCalibrationFactor).
- */
-function calibrate(
-  catalogue: Catalogue,
-  requested: Readonly<Record<string, number | "estimate">>,
-  sites: readonly Site[],
-  windowYears: number,
-): { catalogue: Catalogue; calibrations: SpfCalibration[] } {
-  const calibrations: SpfCalibration[] = [];
-  const performanceFunctions = catalogue.performanceFunctions.map((spf): SafetyPerformanceFunction => {
-    const asked = Object.hasOwn(requested, spf.id) ? requested[spf.id] : undefined;
-    if (asked === undefined) return spf;
-    if (asked !== "estimate") {
-      calibrations.push({ performanceFunction: spf.id, factor: asked, method: "given" });
-      return { ...spf, calibrationFactor: asked };
-    }
-    const usable = sites.filter((site) => site.performanceFunction === spf.id && empiricalBayesGap(site, spf) === undefined);
-    const estimate = estimateCalibrationFactor(spf, usable, windowYears);
-    if (estimate === undefined) return spf;
-    calibrations.push({ performanceFunction: spf.id, method: "estimated", ...estimate });
-    return { ...spf, calibrationFactor: estimate.factor };
-  });
-  return { catalogue: { ...catalogue, performanceFunctions }, calibrations };
 }
 
 function toSite(raw: RawSite): Site {

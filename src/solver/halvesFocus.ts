@@ -1,0 +1,56 @@
+import { NO_OPTION } from "./buildGroupHull.js";
+import { HALF_LIMIT } from "./searchCoreByHalves.js";
+import type { Programme } from "./types.js";
+
+// What option a of group g puts on row r: row 0 is the budget (its cost), row r > 0 side constraint r − 1.
+function rowUse(programme: Programme, r: number, g: number, a: number): number {
+  if (a === NO_OPTION) return 0;
+  return r === 0 ? programme.groups[g]!.options[a]!.cost : (programme.constraints[r - 1]!.coefficients[g]?.[a] ?? 0);
+}
+
+// The row the halves search matches on: the one whose multiplier times its spread over the
+// restriction's choices is largest (the binding row that decides the fill); the budget when none binds.
+export function bindingRow(programme: Programme, choices: readonly (readonly number[])[], rowMultipliers: readonly number[]): number {
+  let bestRow = 0;
+  let bestScore = 0;
+  rowMultipliers.forEach((mu, r) => {
+    if (mu <= 0) return;
+    let spread = 0;
+    choices.forEach((allowed, g) => {
+      if (allowed.length < 2) return;
+      let low = Number.POSITIVE_INFINITY;
+      let high = Number.NEGATIVE_INFINITY;
+      for (const a of allowed) {
+        const x = rowUse(programme, r, g, a);
+        low = Math.min(low, x);
+        high = Math.max(high, x);
+      }
+      spread += high - low;
+    });
+    if (mu * spread > bestScore) {
+      bestScore = mu * spread;
+      bestRow = r;
+    }
+  });
+  return bestRow;
+}
+
+// The restriction with every group held at the incumbent's choice except those that move the sort
+// row most, as many as fit in two halves of HALF_LIMIT programmes (split as `searchCoreByHalves` splits).
+export function focusChoices(programme: Programme, choices: readonly (readonly number[])[], held: readonly (number | null)[], sortRow: number): number[][] {
+  const spread = choices.map((allowed, g) => {
+    const uses = allowed.map((a) => rowUse(programme, sortRow, g, a));
+    return allowed.length < 2 ? 0 : Math.max(...uses) - Math.min(...uses);
+  });
+  const wanted = choices.map((_, g) => g).filter((g) => choices[g]!.length > 1).sort((x, y) => spread[y]! - spread[x]! || x - y);
+  const picked = new Set<number>();
+  const sizes = [1, 1];
+  // Largest first into the smaller half, as the search splits them; a group that fits in neither is left out.
+  for (const g of [...wanted].sort((x, y) => choices[y]!.length - choices[x]!.length || spread[y]! - spread[x]! || x - y)) {
+    const h = sizes[0]! <= sizes[1]! ? 0 : 1;
+    if (sizes[h]! * choices[g]!.length > HALF_LIMIT / 2) continue;
+    sizes[h] = sizes[h]! * choices[g]!.length;
+    picked.add(g);
+  }
+  return choices.map((allowed, g) => (picked.has(g) ? [...allowed] : [held[g] ?? NO_OPTION]));
+}

@@ -1,6 +1,8 @@
 import { NO_OPTION } from "./buildGroupHull.js";
-import { HALF_LIMIT } from "./searchCoreByHalves.js";
 import type { Programme } from "./types.js";
+
+/** Most programmes per half of the focused search: it runs between HiGHS slices, so it stays well under a second. */
+const FOCUS_HALF_LIMIT = 1 << 18;
 
 // What option a of group g puts on row r: row 0 is the budget (its cost), row r > 0 side constraint r − 1.
 function rowUse(programme: Programme, r: number, g: number, a: number): number {
@@ -36,7 +38,7 @@ export function bindingRow(programme: Programme, choices: readonly (readonly num
 }
 
 // The restriction with every group held at the incumbent's choice except those that move the sort
-// row most, as many as fit in two halves of HALF_LIMIT programmes (split as `searchCoreByHalves` splits).
+// row most, as many as fit in two halves of FOCUS_HALF_LIMIT programmes (split as `searchCoreByHalves` splits).
 export function focusChoices(programme: Programme, choices: readonly (readonly number[])[], held: readonly (number | null)[], sortRow: number): number[][] {
   const spread = choices.map((allowed, g) => {
     const uses = allowed.map((a) => rowUse(programme, sortRow, g, a));
@@ -48,7 +50,7 @@ export function focusChoices(programme: Programme, choices: readonly (readonly n
   // Largest first into the smaller half, as the search splits them; a group that fits in neither is left out.
   for (const g of [...wanted].sort((x, y) => choices[y]!.length - choices[x]!.length || spread[y]! - spread[x]! || x - y)) {
     const h = sizes[0]! <= sizes[1]! ? 0 : 1;
-    if (sizes[h]! * choices[g]!.length > HALF_LIMIT / 2) continue;
+    if (sizes[h]! * choices[g]!.length > FOCUS_HALF_LIMIT) continue;
     sizes[h] = sizes[h]! * choices[g]!.length;
     picked.add(g);
   }

@@ -1,8 +1,13 @@
 import { NO_OPTION } from "./buildGroupHull.js";
+import { listHalf, splitHalves } from "./halfLists.js";
+import { MaxTree, RangeHeap } from "./rangeMaximum.js";
 import type { Programme } from "./types.js";
 
-/** Most programmes one half may hold (memory: one number per row per programme). */
-export const HALF_LIMIT = 1 << 19;
+/** Most programmes one half may hold. */
+export const HALF_LIMIT = 1 << 21;
+
+/** Most numbers one half may hold (its value and its use of each listed row, per programme): 64 MiB. */
+const HALF_NUMBERS = 1 << 23;
 
 /** Candidates tried per programme listed, in all, before the search gives up its proof (plus a fixed allowance). */
 const POPS_PER_PROGRAMME = 64;
@@ -58,7 +63,7 @@ export interface CoreSearchResult {
  * Why: when a K+A share floor binds and K+A is the objective, the LP multipliers make every option
  * outside the floor's scope worth the same, so the restricted programme is a subset-sum (fill the
  * floor's room as exactly as possible) on which branch and bound cannot close the last 1e-7 of gap.
- * Listing halves does it exactly for up to about 2^36 programmes.
+ * Listing halves does it exactly for up to about 2^42 programmes.
  *
  * Feasibility is judged as `checkSolution` does, but with the slack of 1e-9 of max(1, |right-hand
  * side|) only, so every programme this accepts `checkSolution` accepts too.
@@ -100,21 +105,24 @@ export function searchCoreByHalves(search: CoreSearch): CoreSearchResult {
   }
   for (let r = 0; r < rowCount; r += 1) room[r] -= fixedUse[r]!;
 
-  // Halves of about equal size: largest groups first, each to the smaller half.
-  const halves: number[][] = [[], []];
-  const sizes = [1, 1];
-  for (const g of [...core].sort((x, y) => choices[y]!.length - choices[x]!.length || x - y)) {
-    const h = sizes[0]! <= sizes[1]! ? 0 : 1;
-    halves[h]!.push(g);
-    sizes[h] = sizes[h]! * choices[g]!.length;
-    if (sizes[h]! > Math.min(HALF_LIMIT, search.halfLimit ?? HALF_LIMIT)) return { status: "too-large", objective: search.floor };
+  // Only rows the core can move are listed (memory: one number per row per programme); the others
+  // hold the fixed groups' use alone, so one that is already broken leaves nothing feasible.
+  const rows = [sortRow];
+  for (let r = 0; r < rowCount; r += 1) {
+    if (r === sortRow) continue;
+    if (core.some((g) => choices[g]!.some((a) => use(g, a, r) !== 0))) rows.push(r);
+    else if (room[r]! + slack[r]! < 0) return { status: "complete", objective: search.floor };
   }
-  const first = listHalf(halves[0]!, choices, rowCount, use, value);
-  const second = listHalf(halves[1]!, choices, rowCount, use, value);
+  const halves = splitHalves(core, choices);
+  const limit = Math.min(HALF_LIMIT, Math.floor(HALF_NUMBERS / (1 + rows.length)), search.halfLimit ?? HALF_LIMIT);
+  if (halves.some((half) => half.reduce((n, g) => n * choices[g]!.length, 1) > limit)) return { status: "too-large", objective: search.floor };
+  const listed = (g: number, a: number, k: number): number => use(g, a, rows[k]!);
+  const first = listHalf(halves[0]!, choices, rows.length, listed, value);
+  const second = listHalf(halves[1]!, choices, rows.length, listed, value);
 
-  // Second half by its use of the sort row; the tree answers "best value among the first n".
+  // Second half by its use of the sort row (listed first); the tree answers "best value among the first n".
   const order = Int32Array.from({ length: second.count }, (_, i) => i);
-  const key = second.uses[sortRow]!;
+  const key = second.uses[0]!;
   order.sort((x, y) => key[x]! - key[y]! || x - y);
   const sortedKey = Float64Array.from(order, (i) => key[i]!);
   const sortedValue = Float64Array.from(order, (i) => second.values[i]!);
@@ -128,16 +136,20 @@ export function searchCoreByHalves(search: CoreSearch): CoreSearchResult {
   const popBudget = POPS_PER_PROGRAMME * (first.count + second.count) + 65_536;
   let totalPops = 0;
   let unprovenPops = 0;
+  let secondBest = Number.NEGATIVE_INFINITY;
+  for (const v of second.values) secondBest = Math.max(secondBest, v);
   for (let q = 0; q < firstOrder.length; q += 1) {
+    const i = firstOrder[q]!;
+    const head = fixedValue + first.values[i]!;
+    // First-half programmes come best first: once none can beat the best, no later one can.
+    if (head + secondBest <= best + tolerance) break;
     const givenUp = !proven && (search.keepLooking === false || unprovenPops > UNPROVEN_POP_LIMIT);
     if (givenUp || ((q & 1023) === 0 && Date.now() > deadline)) {
       proven = false;
       break;
     }
-    const i = firstOrder[q]!;
-    const head = fixedValue + first.values[i]!;
     // Largest n with sortedKey[n - 1] within the sort row's room.
-    const left = room[sortRow]! - first.uses[sortRow]![i]! + slack[sortRow]!;
+    const left = room[sortRow]! - first.uses[0]![i]! + slack[sortRow]!;
     let lo = 0;
     let hi = sortedKey.length;
     while (lo < hi) {
@@ -154,8 +166,9 @@ export function searchCoreByHalves(search: CoreSearch): CoreSearchResult {
       if (head + sortedValue[top.at]! <= best + tolerance) break;
       const j = order[top.at]!;
       let fits = true;
-      for (let r = 0; r < rowCount && fits; r += 1) {
-        if (r !== sortRow && first.uses[r]![i]! + second.uses[r]![j]! > room[r]! + slack[r]!) fits = false;
+      for (let k = 1; k < rows.length && fits; k += 1) {
+        const r = rows[k]!;
+        if (first.uses[k]![i]! + second.uses[k]![j]! > room[r]! + slack[r]!) fits = false;
       }
       if (fits) {
         best = head + sortedValue[top.at]!;
@@ -181,148 +194,4 @@ export function searchCoreByHalves(search: CoreSearch): CoreSearchResult {
   first.decode(bestPair[0], choice);
   second.decode(bestPair[1], choice);
   return { status, choice, objective: best };
-}
-
-interface HalfList {
-  readonly count: number;
-  readonly values: Float64Array;
-  /** uses[r][i]: programme i's use of row r. */
-  readonly uses: readonly Float64Array[];
-  /** Writes programme i's choices into a full choice vector. */
-  decode(i: number, choice: (number | null)[]): void;
-}
-
-// Every programme of one half, built group by group: programme index i*n + c extends i with choice c.
-function listHalf(
-  half: readonly number[],
-  choices: readonly (readonly number[])[],
-  rowCount: number,
-  use: (g: number, a: number, r: number) => number,
-  value: (g: number, a: number) => number,
-): HalfList {
-  let values = new Float64Array([0]);
-  let uses = Array.from({ length: rowCount }, () => new Float64Array([0]));
-  for (const g of half) {
-    const allowed = choices[g]!;
-    const n = allowed.length;
-    const count = values.length * n;
-    const nextValues = new Float64Array(count);
-    const nextUses = uses.map(() => new Float64Array(count));
-    for (let i = 0; i < values.length; i += 1) {
-      for (let c = 0; c < n; c += 1) {
-        nextValues[i * n + c] = values[i]! + value(g, allowed[c]!);
-        for (let r = 0; r < rowCount; r += 1) nextUses[r]![i * n + c] = uses[r]![i]! + use(g, allowed[c]!, r);
-      }
-    }
-    values = nextValues;
-    uses = nextUses;
-  }
-  return {
-    count: values.length,
-    values,
-    uses,
-    decode(i, choice) {
-      let rest = i;
-      for (let h = half.length - 1; h >= 0; h -= 1) {
-        const allowed = choices[half[h]!]!;
-        const a = allowed[rest % allowed.length]!;
-        choice[half[h]!] = a === NO_OPTION ? null : a;
-        rest = Math.floor(rest / allowed.length);
-      }
-    },
-  };
-}
-
-// Range-maximum tree over positions 0..n-1 (iterative segment tree holding the position of the largest value; ties: the lower position).
-class MaxTree {
-  private readonly size: number;
-  private readonly best: Int32Array;
-
-  constructor(private readonly values: Float64Array) {
-    let size = 1;
-    while (size < values.length) size *= 2;
-    this.size = size;
-    this.best = new Int32Array(2 * size).fill(-1);
-    for (let i = 0; i < values.length; i += 1) this.best[size + i] = i;
-    for (let node = size - 1; node >= 1; node -= 1) this.best[node] = this.better(this.best[2 * node]!, this.best[2 * node + 1]!);
-  }
-
-  /** Position of the largest value in [from, to). */
-  argmax(from: number, to: number): number {
-    let result = -1;
-    let lo = from + this.size;
-    let hi = to + this.size;
-    while (lo < hi) {
-      if (lo & 1) result = this.better(result, this.best[lo++]!);
-      if (hi & 1) result = this.better(result, this.best[--hi]!);
-      lo >>= 1;
-      hi >>= 1;
-    }
-    return result;
-  }
-
-  valueAt(position: number): number {
-    return this.values[position]!;
-  }
-
-  private better(x: number, y: number): number {
-    if (x < 0) return y;
-    if (y < 0) return x;
-    return this.values[y]! > this.values[x]! || (this.values[y] === this.values[x] && y < x) ? y : x;
-  }
-}
-
-interface RangeEntry {
-  readonly from: number;
-  readonly to: number;
-  /** Position of the range's largest value. */
-  readonly at: number;
-  readonly value: number;
-}
-
-// Ranges of the sorted second half by their largest value: the next-best candidates for one query.
-class RangeHeap {
-  private items: RangeEntry[] = [];
-
-  get size(): number {
-    return this.items.length;
-  }
-
-  clear(): void {
-    this.items = [];
-  }
-
-  push(tree: MaxTree, from: number, to: number): void {
-    const at = tree.argmax(from, to);
-    const entry = { from, to, at, value: tree.valueAt(at) };
-    const items = this.items;
-    items.push(entry);
-    let k = items.length - 1;
-    while (k > 0) {
-      const parent = (k - 1) >> 1;
-      if (items[parent]!.value >= entry.value) break;
-      items[k] = items[parent]!;
-      k = parent;
-    }
-    items[k] = entry;
-  }
-
-  pop(): RangeEntry {
-    const items = this.items;
-    const top = items[0]!;
-    const last = items.pop()!;
-    if (items.length > 0) {
-      let k = 0;
-      for (;;) {
-        const l = 2 * k + 1;
-        if (l >= items.length) break;
-        const child = l + 1 < items.length && items[l + 1]!.value > items[l]!.value ? l + 1 : l;
-        if (items[child]!.value <= last.value) break;
-        items[k] = items[child]!;
-        k = child;
-      }
-      items[k] = last;
-    }
-    return top;
-  }
 }

@@ -3,6 +3,7 @@ import { buildHighsModel, type HighsModel } from "./buildHighsModel.js";
 import { NO_OPTION } from "./buildGroupHull.js";
 import { checkSolution } from "./checkSolution.js";
 import { readHighsChoice } from "./readHighsChoice.js";
+import { propagateRows } from "./propagateRows.js";
 import { runHighs } from "./runHighs.js";
 import { bindingRow, focusChoices } from "./halvesFocus.js";
 import { HALF_LIMIT, searchCoreByHalves, type CoreSearch, type CoreSearchResult } from "./searchCoreByHalves.js";
@@ -34,8 +35,9 @@ const SMALL_HALF_LIMIT = 1 << 12;
  * 2. The Lagrangian bound U = sum_k mu_k rhs_k + sum_g max_a (value - sum_k mu_k coef_k), valid for
  *    any mu >= 0 and equal to the LP optimum at the LP duals. A programme using an option whose
  *    reduced value falls d below its group's best is worth at most U - d.
- * 3. A restriction keeps only options with d <= delta (most groups keep one). When the groups left
- *    with a choice have at most about 2^36 programmes between them, the restriction is searched
+ * 3. A restriction keeps only options with d <= delta (most groups keep one), then row tightening
+ *    (`propagateRows`) drops the choices no feasible programme can make. When the groups left
+ *    with a choice have at most about 2^42 programmes between them, the restriction is searched
  *    exhaustively by halves (`searchCoreByHalves`): a binding K+A share floor with K+A as the
  *    objective ties every option outside its scope and turns the restriction into a subset-sum
  *    that branch and bound cannot close. Otherwise HiGHS solves it with gap 0, warm-started from
@@ -128,6 +130,9 @@ export function solveWithSideConstraints(
     const bound = Math.max(incumbent.objective, Math.min(upper, Math.max(restrictedBound, outside)));
     return { status: "time-limit", choice: incumbent.choice, bound, budgetMarginalValue: budgetMultiplier, diagnosis: `The search stopped before the optimum was proven (${why}); the best verified programme is reported with its bound.` };
   };
+  const infeasible: EngineResult = { status: "infeasible", choice: none, bound: Number.NaN, budgetMarginalValue: budgetMultiplier };
+  // After a restriction without any feasible programme: tenfold wider, then the whole programme.
+  const widenTenfold = (t: number): number => (t * 10 > scale ? Number.POSITIVE_INFINITY : t * 10);
   const proven = (bound: number): EngineResult => ({
     status: "optimal",
     choice: incumbent!.choice,
@@ -146,11 +151,25 @@ export function solveWithSideConstraints(
     const keep = groups.map((group, g) =>
       group.options.map((_, a) => held?.[g] === a || best[g]! - reduced[g]![a]! <= threshold),
     );
-    const mustPick = groups.map((group, g) => !group.required && best[g]! > threshold && (held === undefined || held[g] !== null));
-    const choices = groups.map((group, g) => {
-      const kept = group.options.flatMap((_, a) => (keep[g]![a] ? [a] : []));
-      return group.required || mustPick[g] ? kept : [NO_OPTION, ...kept];
+    const worthPicking = groups.map((group, g) => !group.required && best[g]! > threshold && (held === undefined || held[g] !== null));
+    // Then drop what no feasible programme can use (it never drops the incumbent's options).
+    const choices = propagateRows(
+      programme,
+      groups.map((group, g) => {
+        const kept = group.options.flatMap((_, a) => (keep[g]![a] ? [a] : []));
+        return group.required || worthPicking[g] ? kept : [NO_OPTION, ...kept];
+      }),
+    );
+    groups.forEach((_, g) => {
+      keep[g] = keep[g]!.map((_, a) => choices[g]!.includes(a));
     });
+    const mustPick = groups.map((group, g) => !group.required && !choices[g]!.includes(NO_OPTION));
+    if (choices.some((allowed) => allowed.length === 0)) {
+      // No programme of the restriction meets every rule: widen it (the incumbent, if any, is in it, so there is none yet).
+      if (widest) return infeasible;
+      threshold = widenTenfold(threshold);
+      continue;
+    }
     const sortRow = bindingRow(programme, choices, rowMultipliers);
 
     // 1. The whole restriction by halves, when it is small enough.
@@ -169,8 +188,8 @@ export function solveWithSideConstraints(
     if (exhaustive.choice !== undefined) verifiedAll = accept(exhaustive.choice);
     if (exhaustive.status === "complete" && verifiedAll) {
       if (incumbent === undefined) {
-        if (widest) return { status: "infeasible", choice: none, bound: Number.NaN, budgetMarginalValue: budgetMultiplier };
-        threshold = threshold * 10 > scale ? Number.POSITIVE_INFINITY : threshold * 10;
+        if (widest) return infeasible;
+        threshold = widenTenfold(threshold);
         continue;
       }
       // Any programme using a dropped option is worth less than U - threshold.
@@ -212,8 +231,8 @@ export function solveWithSideConstraints(
       continue;
     }
     if (run.status === "infeasible") {
-      if (widest) return { status: "infeasible", choice: none, bound: Number.NaN, budgetMarginalValue: budgetMultiplier };
-      threshold = threshold * 10 > scale ? Number.POSITIVE_INFINITY : threshold * 10;
+      if (widest) return infeasible;
+      threshold = widenTenfold(threshold);
       continue;
     }
     if (choice === undefined || incumbent === undefined) return stop("HiGHS gave no usable programme");

@@ -71,8 +71,8 @@ describe("searchCoreByHalves", () => {
 
   it("refuses a restriction with more programmes than two halves can hold", () => {
     const group = { id: "g", required: false, options: Array.from({ length: 15 }, (_, a) => ({ cost: a, value: a })) };
-    // 16 choices per group: 16^10 = 2^40 programmes, above two halves of 2^19.
-    const programme: Programme = { budget: 10, groups: Array.from({ length: 10 }, (_, g) => ({ ...group, id: `g${g}` })), constraints: [] };
+    // 16 choices per group: 16^12 = 2^48 programmes, above two halves of 2^21.
+    const programme: Programme = { budget: 10, groups: Array.from({ length: 12 }, (_, g) => ({ ...group, id: `g${g}` })), constraints: [] };
     const choices = programme.groups.map(() => [NO_OPTION, ...group.options.map((_, a) => a)]);
     const result = searchCoreByHalves({ programme, choices, sortRow: 0, floor: Number.NEGATIVE_INFINITY, tolerance: 0, deadline: Number.POSITIVE_INFINITY });
     expect(result.status).toBe("too-large");

@@ -89,9 +89,12 @@ describe("solveWithSideConstraints keeps what it has verified", () => {
     const lying = lyingHighs(real, () => true);
     const raw = solveWithSideConstraints(lying.highs, programme, DEFAULT_SOLVE_OPTIONS, incomplete);
     const solution = verifyEngineResult(programme, "exact", raw);
-    expect(lying.calls()).toBe(MAX_REJECTED_ANSWERS + 1);
+    // Where row tightening leaves a site one option, "every column 1" is a real programme and is kept;
+    // every other answer is refused, and the search stops after the 21st refusal.
+    expect(lying.calls()).toBeGreaterThanOrEqual(MAX_REJECTED_ANSWERS + 1);
     expect(solution.status).toBe("time-limit");
-    expect(solution.choice).toEqual(nothing);
+    expect(checkSolution(programme, solution.choice).feasible).toBe(true);
+    expect(solution.objective).toBeGreaterThanOrEqual(0);
     expect(Number.isFinite(solution.bound)).toBe(true);
     expect(solution.bound).toBeGreaterThanOrEqual(reference - 1e-9);
     expect(solution.gap).toBeGreaterThanOrEqual(0);

@@ -17,4 +17,5 @@ export const SOLVER_BENCH_INSTANCES: readonly BenchInstance[] = [
   { name: "single 20,000x6 b30", shape: { sites: 20_000, budgetShare: 0.3, rules: false, seed: 203, options: 6 } },
   { name: "rules 1,000 b30", shape: { sites: 1_000, budgetShare: 0.3, rules: true, seed: 13 } },
   { name: "rules 5,000 b30", shape: { sites: 5_000, budgetShare: 0.3, rules: true, seed: 53 } },
+  { name: "rules 20,000 b30", shape: { sites: 20_000, budgetShare: 0.3, rules: true, seed: 204 } },
 ];

@@ -20,7 +20,8 @@ const DISTRICTS = 4;
  * A seeded programme shaped like a city's candidate list: 3-6 alternatives per
  * site, costs 20k-3M on a 1k grid, KSI avoided rising with cost with diminishing returns and
  * noise. With `rules`: each of 4 districts capped at 35% of the budget, flagged sites (about
- * 30%) taking at least 30% of total spend, and at most a fifth of the sites funded.
+ * 30%) taking at least 30% of total spend and giving at least 35% of the K+A crashes avoided (the
+ * value), and at most a fifth of the sites funded.
  */
 export function generateBenchProgramme(shape: BenchProgrammeShape): Programme {
   const random = mulberry32(shape.seed);
@@ -63,6 +64,13 @@ export function generateBenchProgramme(shape: BenchProgrammeShape): Programme {
       sense: ">=",
       rhs: 0,
       coefficients: groups.map((group, g) => group.options.map((o) => (flagged[g] ? 0.7 : -0.3) * o.cost)),
+    });
+    constraints.push({
+      id: "ksi-share-flagged",
+      label: "K+A crashes avoided at flagged sites >= 35% of all avoided",
+      sense: ">=",
+      rhs: 0,
+      coefficients: groups.map((group, g) => group.options.map((o) => (flagged[g] ? 0.65 : -0.35) * o.value)),
     });
     constraints.push({
       id: "count",

@@ -41,6 +41,13 @@ export const HIGHS_FEASIBILITY_TOLERANCE = FEASIBILITY_RELATIVE_TOLERANCE;
  * a hard stop run it in a worker thread), and feasibility tolerances of 1e-9.
  */
 export function runHighs(highs: Highs, data: ModelData, settings: HighsRunSettings): HighsRun {
+  // A model without columns (no site has options, or every site is fixed) is solved by choosing
+  // nothing, if every row allows 0 (a no-good row on the only point does not); HiGHS is not asked.
+  if (data.numCols === 0) {
+    const zeroFits = Array.from(data.rowLower, (lower, r) => lower <= 1e-9 && data.rowUpper[r]! >= -1e-9).every(Boolean);
+    if (!zeroFits) return { status: "infeasible", colValue: new Float64Array(0), rowDual: new Float64Array(0), bound: Number.NaN, detail: "infeasible" };
+    return { status: "optimal", colValue: new Float64Array(0), rowDual: new Float64Array(data.numRows), bound: 0, detail: "empty" };
+  }
   const model = highs.createModel(data);
   try {
     model.options.set({
@@ -62,10 +69,6 @@ export function runHighs(highs: Highs, data: ModelData, settings: HighsRunSettin
     const rowDual = !integer && solution !== undefined ? solution.rowDual : new Float64Array(0);
     const bound = integer ? Number(model.info.get("mip_dual_bound")) : hasPoint ? model.getObjectiveValue() : Number.NaN;
     if (modelStatus === codes.optimal) return { status: "optimal", colValue, rowDual, bound, detail: "optimal" };
-    // A model without columns (no site has options) is solved by choosing nothing.
-    if (modelStatus === codes.empty && data.numCols === 0) {
-      return { status: "optimal", colValue: new Float64Array(0), rowDual: new Float64Array(data.numRows), bound: 0, detail: "empty" };
-    }
     if (modelStatus === codes.infeasible || modelStatus === codes.unboundedOrInfeasible) {
       return { status: "infeasible", colValue: new Float64Array(0), rowDual, bound: Number.NaN, detail: "infeasible" };
     }

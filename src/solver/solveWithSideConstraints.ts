@@ -1,9 +1,9 @@
 import type { Highs } from "highs";
-import { buildHighsModel, type HighsModel } from "./buildHighsModel.js";
 import { NO_OPTION } from "./buildGroupHull.js";
+import { buildRestrictedModel } from "./buildRestrictedModel.js";
 import { checkSolution } from "./checkSolution.js";
-import { readHighsChoice } from "./readHighsChoice.js";
 import { propagateRows } from "./propagateRows.js";
+import { relaxationMultipliers } from "./relaxationMultipliers.js";
 import { runHighs } from "./runHighs.js";
 import { bindingRow, focusChoices } from "./halvesFocus.js";
 import { HALF_LIMIT, searchCoreByHalves, type CoreSearch, type CoreSearchResult } from "./searchCoreByHalves.js";
@@ -30,8 +30,8 @@ const SMALL_HALF_LIMIT = 1 << 12;
 
 /**
  * The exact engine for programmes with side constraints (caps, floors, shares, counts):
- * 1. LP relaxation of the whole programme by HiGHS; its row duals are Lagrange multipliers mu
- *    for the budget and every side row.
+ * 1. Lagrange multipliers mu >= 0 for the budget and every side row, at the LP relaxation's optimum
+ *    (`relaxationMultipliers`: the Lagrangian dual by cutting planes, HiGHS's LP duals if that fails).
  * 2. The Lagrangian bound U = sum_k mu_k rhs_k + sum_g max_a (value - sum_k mu_k coef_k), valid for
  *    any mu >= 0 and equal to the LP optimum at the LP duals. A programme using an option whose
  *    reduced value falls d below its group's best is worth at most U - d.
@@ -65,21 +65,17 @@ export function solveWithSideConstraints(
   const { groups, constraints, budget } = programme;
   const none = groups.map(() => null);
 
-  const relaxation = runHighs(highs, buildHighsModel(highs, programme, false).data, {
-    timeLimitSeconds: secondsLeft(),
-    relativeGap: 0,
-    absoluteGap: 0,
-  });
+  const relaxation = relaxationMultipliers(highs, programme, deadline);
   if (relaxation.status === "infeasible") {
     return { status: "infeasible", choice: none, bound: Number.NaN, budgetMarginalValue: Number.NaN };
   }
-  if (relaxation.status !== "optimal") {
+  if (relaxation.status !== "found") {
     return { status: "not-solved", choice: none, bound: Number.NaN, budgetMarginalValue: Number.NaN, diagnosis: `The LP relaxation did not finish (${relaxation.detail}).` };
   }
-  // Multipliers on rows written as "<=": a >= row is negated, so its multiplier is minus its dual.
-  const budgetMultiplier = Math.max(0, relaxation.rowDual[0]!);
+  // Multipliers on rows written as "<=" (a >= row negated).
+  const budgetMultiplier = relaxation.budget;
   const signs = constraints.map((c) => (c.sense === "<=" ? 1 : -1));
-  const multipliers = constraints.map((_, k) => Math.max(0, signs[k]! * relaxation.rowDual[1 + groups.length + k]!));
+  const multipliers = relaxation.constraints;
 
   let upper = budgetMultiplier * budget;
   constraints.forEach((c, k) => {
@@ -148,22 +144,15 @@ export function solveWithSideConstraints(
     const widest = !Number.isFinite(threshold);
     // The incumbent's options always stay, so every restriction contains the best programme so far.
     const held = incumbent?.choice;
-    const keep = groups.map((group, g) =>
-      group.options.map((_, a) => held?.[g] === a || best[g]! - reduced[g]![a]! <= threshold),
-    );
     const worthPicking = groups.map((group, g) => !group.required && best[g]! > threshold && (held === undefined || held[g] !== null));
     // Then drop what no feasible programme can use (it never drops the incumbent's options).
     const choices = propagateRows(
       programme,
       groups.map((group, g) => {
-        const kept = group.options.flatMap((_, a) => (keep[g]![a] ? [a] : []));
+        const kept = group.options.flatMap((_, a) => (held?.[g] === a || best[g]! - reduced[g]![a]! <= threshold ? [a] : []));
         return group.required || worthPicking[g] ? kept : [NO_OPTION, ...kept];
       }),
     );
-    groups.forEach((_, g) => {
-      keep[g] = keep[g]!.map((_, a) => choices[g]!.includes(a));
-    });
-    const mustPick = groups.map((group, g) => !group.required && !choices[g]!.includes(NO_OPTION));
     if (choices.some((allowed) => allowed.length === 0)) {
       // No programme of the restriction meets every rule: widen it (the incumbent, if any, is in it, so there is none yet).
       if (widest) return infeasible;
@@ -201,7 +190,7 @@ export function solveWithSideConstraints(
     // 2. HiGHS on the restriction. With ties, a short first run: if it does not finish, the halves
     // search improves its programme on the groups that move the binding row most (which narrows the
     // restriction) before HiGHS goes on.
-    const model = buildHighsModel(highs, programme, true, { keep, mustPick }, rejected);
+    const model = buildRestrictedModel(highs, programme, choices, rejected);
     const slice = degenerate && exhaustive.status === "too-large" && slicedAt !== threshold;
     if (slice) slicedAt = threshold;
     const run = runHighs(highs, model.data, {
@@ -210,9 +199,11 @@ export function solveWithSideConstraints(
       ...(slice ? { maxNodes: SLICE_NODES } : {}),
       relativeGap: settings.relativeGap,
       absoluteGap: tolerance,
-      ...(incumbent === undefined ? {} : { start: startingPoint(model, incumbent.choice) }),
+      ...(incumbent === undefined ? {} : { start: model.start(incumbent.choice) }),
     });
-    const choice = readHighsChoice(model, run.colValue, groups.length);
+    const choice = model.lift(run.colValue);
+    // HiGHS's bound is on the open groups; the fixed ones add their value.
+    const runBound = run.bound + model.fixedValue;
     if (choice !== undefined && run.status !== "failed" && !accept(choice)) {
       // HiGHS accepted it within its tolerance; the check did not: cut off exactly this point and solve again.
       rejected.push(choice);
@@ -221,7 +212,7 @@ export function solveWithSideConstraints(
     }
     if (run.status === "failed") return stop(run.detail);
     if (run.status === "time-limit") {
-      if (Number.isFinite(run.bound)) restrictedBound = run.bound;
+      if (Number.isFinite(runBound)) restrictedBound = runBound;
       if (!slice || secondsLeft() <= 0) return stop("time limit");
       if (incumbent !== undefined) {
         const focused = focusChoices(programme, choices, incumbent.choice, sortRow);
@@ -237,13 +228,8 @@ export function solveWithSideConstraints(
     }
     if (choice === undefined || incumbent === undefined) return stop("HiGHS gave no usable programme");
     // Any programme using a dropped option is worth less than U - threshold.
-    if (widest || upper - incumbent.objective <= threshold) return proven(Number.isFinite(run.bound) ? run.bound : incumbent.objective);
+    if (widest || upper - incumbent.objective <= threshold) return proven(Number.isFinite(runBound) ? runBound : incumbent.objective);
     // Widen step by step: each solve improves the incumbent, which keeps the next restriction small.
     threshold = Math.min(upper - incumbent.objective + tolerance, threshold * 10);
   }
-}
-
-// The incumbent as column values of a restricted model (its options are always kept there).
-function startingPoint(model: HighsModel, choice: readonly (number | null)[]): Float64Array {
-  return Float64Array.from(model.columnGroup, (g, j) => (choice[g] === model.columnOption[j] ? 1 : 0));
 }

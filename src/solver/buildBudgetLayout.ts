@@ -23,6 +23,16 @@ export interface BudgetLayout {
   readonly segmentCost: Float64Array;
   readonly segmentValue: Float64Array;
   readonly segmentRatio: Float64Array;
+  /**
+   * Every group's undominated choices (NO_OPTION included when optional), flattened: canonical
+   * position k holds entries undominatedStart[k] .. undominatedStart[k + 1] - 1, each with its option
+   * index, cost and value (0 and 0 for doing nothing), so a budget level's reduced values are one
+   * pass over typed arrays.
+   */
+  readonly undominatedStart: Int32Array;
+  readonly undominatedOption: Int32Array;
+  readonly undominatedCost: Float64Array;
+  readonly undominatedValue: Float64Array;
 }
 
 /**
@@ -69,6 +79,20 @@ export function buildBudgetLayout(canonical: Int32Array, groups: readonly Progra
       s += 1;
     }
   }
+  const undominatedStart = new Int32Array(n + 1);
+  for (let k = 0; k < n; k += 1) undominatedStart[k + 1] = undominatedStart[k]! + hulls[k]!.undominated.length;
+  const undominatedOption = new Int32Array(undominatedStart[n]!);
+  const undominatedCost = new Float64Array(undominatedStart[n]!);
+  const undominatedValue = new Float64Array(undominatedStart[n]!);
+  for (let k = 0; k < n; k += 1) {
+    const options = groups[canonical[k]!]!.options;
+    hulls[k]!.undominated.forEach((a, i) => {
+      const j = undominatedStart[k]! + i;
+      undominatedOption[j] = a;
+      undominatedCost[j] = a < 0 ? 0 : options[a]!.cost;
+      undominatedValue[j] = a < 0 ? 0 : options[a]!.value;
+    });
+  }
   const order = new Int32Array(segmentCount);
   for (let i = 0; i < segmentCount; i += 1) order[i] = i;
   order.sort((x, y) => ratio[y]! - ratio[x]! || group[x]! - group[y]! || from[x]! - from[y]!);
@@ -83,5 +107,9 @@ export function buildBudgetLayout(canonical: Int32Array, groups: readonly Progra
     segmentCost: Float64Array.from(order, (i) => dc[i]!),
     segmentValue: Float64Array.from(order, (i) => dv[i]!),
     segmentRatio: Float64Array.from(order, (i) => ratio[i]!),
+    undominatedStart,
+    undominatedOption,
+    undominatedCost,
+    undominatedValue,
   };
 }

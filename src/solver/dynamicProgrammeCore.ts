@@ -87,9 +87,7 @@ export function dynamicProgrammeCore(problem: CoreProblem): CoreResult {
           position[j] = stateCost.length; // costs only rise from here
           return;
         }
-        const rest = boundAt(next, left, cursor[j]!);
-        cursor[j] = rest.cursor;
-        const bound = stateValue[s]! + kv[a]! + rest.value;
+        const bound = stateValue[s]! + kv[a]! + boundAt(next, left, cursor, j);
         if (bound <= bestValue + tolerance) {
           if (bound > prunedBound) prunedBound = bound;
           continue;
@@ -100,10 +98,12 @@ export function dynamicProgrammeCore(problem: CoreProblem): CoreResult {
       position[j] = stateCost.length;
     };
     for (let j = 0; j < m; j += 1) advance(j);
-    const keepCost: number[] = [];
-    const keepValue: number[] = [];
-    const keepParent: number[] = [];
-    const keepPick: number[] = [];
+    // Typed buffers, doubled when full (no per-state garbage; at most twice the states kept).
+    let keepCost = new Float64Array(Math.max(1, Math.min(stateCost.length * m, 1024)));
+    let keepValue = new Float64Array(keepCost.length);
+    let keepParent = new Int32Array(keepCost.length);
+    let keepPick = new Int32Array(keepCost.length);
+    let kept = 0;
     let top = Number.NEGATIVE_INFINITY;
     for (;;) {
       let pick = -1;
@@ -124,22 +124,29 @@ export function dynamicProgrammeCore(problem: CoreProblem): CoreResult {
       if (pick < 0) break;
       if (pickValue > top) {
         top = pickValue;
-        keepCost.push(pickCost);
-        keepValue.push(pickValue);
-        keepParent.push(position[pick]!);
-        keepPick.push(candidates[pick]!);
+        if (kept === keepCost.length) {
+          keepCost = grown(keepCost);
+          keepValue = grown(keepValue);
+          keepParent = grown(keepParent);
+          keepPick = grown(keepPick);
+        }
+        keepCost[kept] = pickCost;
+        keepValue[kept] = pickValue;
+        keepParent[kept] = position[pick]!;
+        keepPick[kept] = candidates[pick]!;
+        kept += 1;
       }
       position[pick] += 1;
       advance(pick);
     }
-    if (keepCost.length > MAX_STATES) {
+    if (kept > MAX_STATES) {
       stopped = true;
       break;
     }
-    stateCost = Float64Array.from(keepCost);
-    stateValue = Float64Array.from(keepValue);
-    parents.push(Int32Array.from(keepParent));
-    picks.push(Int32Array.from(keepPick));
+    stateCost = keepCost.slice(0, kept);
+    stateValue = keepValue.slice(0, kept);
+    parents.push(keepParent.slice(0, kept));
+    picks.push(keepPick.slice(0, kept));
   }
 
   const choice = Int32Array.from(problem.incumbent);
@@ -155,6 +162,13 @@ export function dynamicProgrammeCore(problem: CoreProblem): CoreResult {
     }
   }
   return { choice, value: bestValue, proven: !stopped, prunedBound, states: parents.reduce((n, p) => n + p.length, 0) };
+}
+
+// A buffer twice as long holding the same leading entries.
+function grown<T extends Float64Array | Int32Array>(buffer: T): T {
+  const bigger = new (buffer.constructor as new (length: number) => T)(buffer.length * 2);
+  bigger.set(buffer);
+  return bigger;
 }
 
 // The LP optimum of groups `first`.. as a function of their budget (-Infinity if even their
@@ -186,18 +200,19 @@ function suffixBound(sorted: SortedSegments, first: number): SuffixBound {
 }
 
 /**
- * The bound at `budget`, given `cursor`: an index at or above the answer, which is the largest j
- * with prefixCost[j] <= room (segments before j fit whole, segment j in part). A caller whose
- * budgets only fall keeps the returned cursor, so a whole layer walks the segments once instead
- * of a binary search per state; the answer is the same.
+ * The bound at `budget`, given `cursors[j]`: an index at or above the answer, which is the largest i
+ * with prefixCost[i] <= room (segments before i fit whole, segment i in part). It moves the cursor
+ * to the answer: a caller whose budgets only fall keeps it, so a whole layer walks the segments once
+ * instead of a binary search per state; the answer is the same.
  */
-function boundAt(bound: SuffixBound, budget: number, cursor: number): { value: number; cursor: number } {
+function boundAt(bound: SuffixBound, budget: number, cursors: Int32Array, j: number): number {
   const room = budget - bound.fixedCost;
-  if (room < 0) return { value: Number.NEGATIVE_INFINITY, cursor };
-  let lo = cursor;
+  if (room < 0) return Number.NEGATIVE_INFINITY;
+  let lo = cursors[j]!;
   while (lo > 0 && bound.prefixCost[lo]! > room) lo -= 1;
+  cursors[j] = lo;
   const partial = lo < bound.ratios.length ? (room - bound.prefixCost[lo]!) * bound.ratios[lo]! : 0;
-  return { value: bound.fixedValue + bound.prefixValue[lo]! + partial, cursor: lo };
+  return bound.fixedValue + bound.prefixValue[lo]! + partial;
 }
 
 interface SortedSegments {

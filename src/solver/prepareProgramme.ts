@@ -8,7 +8,7 @@ import { solveSingleBudget } from "./solveSingleBudget.js";
 import { solveWithHighs } from "./solveWithHighs.js";
 import { solveWithLpSolver } from "./solveWithLpSolver.js";
 import { solveWithSideConstraints } from "./solveWithSideConstraints.js";
-import { validateProgramme } from "./validateProgramme.js";
+import { validateBudget, validateProgramme } from "./validateProgramme.js";
 import { emptySolution, verifyEngineResult } from "./verifyEngineResult.js";
 import {
   DEFAULT_SOLVE_OPTIONS,
@@ -104,9 +104,9 @@ export function prepareProgramme(programme: Programme, options: Partial<SolveOpt
       groups: groupsWithValues(change.values),
       constraints: change.constraints ?? programme.constraints,
     };
-    if (change.values !== undefined || change.constraints !== undefined || change.budget !== undefined) {
-      validateProgramme(target);
-    }
+    // The prepared programme was validated whole; a budget-only change (a frontier level) needs only its budget checked.
+    if (change.values !== undefined || change.constraints !== undefined) validateProgramme(target);
+    else if (change.budget !== undefined) validateBudget(change.budget);
     // One engine per solve, never a silent second one: an answer says which engine gave it.
     const engine: ConcreteEngine = settings.engine === "auto" ? "exact" : settings.engine;
     const reason = diagnoseInfeasibility(target);

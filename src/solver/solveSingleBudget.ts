@@ -27,15 +27,13 @@ export function solveSingleBudget(layout: BudgetLayout, statedBudget: number, se
   // programme that spends the budget exactly could be rejected. checkSolution allows 1e-9.
   const budget = statedBudget + BUDGET_ROUNDING_ALLOWANCE * Math.max(1, statedBudget);
   const started = Date.now();
-  const { canonical, hulls, groups } = layout;
+  const { canonical, hulls } = layout;
   const n = canonical.length;
   const choice: (number | null)[] = new Array<number | null>(n).fill(null);
   const remaining0 = budget - layout.baseCost;
   if (remaining0 < 0) {
     return { status: "infeasible", choice, bound: Number.NaN, budgetMarginalValue: Number.NaN };
   }
-  const cost = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.cost);
-  const value = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.value);
 
   // 1. LP relaxation.
   const level = new Int32Array(n);
@@ -79,26 +77,30 @@ export function solveSingleBudget(layout: BudgetLayout, statedBudget: number, se
   const reduced: ReducedValues = {
     best: new Float64Array(n),
     bestOption: new Int32Array(n),
+    bestCost: new Float64Array(n),
+    bestValue: new Float64Array(n),
     secondGap: new Float64Array(n),
   };
+  const { undominatedStart, undominatedOption, undominatedCost, undominatedValue } = layout;
   let upper = lambda * budget;
   for (let k = 0; k < n; k += 1) {
-    const g = canonical[k]!;
     let first = Number.NEGATIVE_INFINITY;
     let second = Number.NEGATIVE_INFINITY;
-    let firstOption = NO_OPTION;
-    for (const a of hulls[k]!.undominated) {
-      const r = value(g, a) - lambda * cost(g, a);
+    let firstAt = -1;
+    for (let j = undominatedStart[k]!; j < undominatedStart[k + 1]!; j += 1) {
+      const r = undominatedValue[j]! - lambda * undominatedCost[j]!;
       if (r > first) {
         second = first;
         first = r;
-        firstOption = a;
+        firstAt = j;
       } else if (r > second) {
         second = r;
       }
     }
     reduced.best[k] = first;
-    reduced.bestOption[k] = firstOption;
+    reduced.bestOption[k] = firstAt < 0 ? NO_OPTION : undominatedOption[firstAt]!;
+    reduced.bestCost[k] = firstAt < 0 ? 0 : undominatedCost[firstAt]!;
+    reduced.bestValue[k] = firstAt < 0 ? 0 : undominatedValue[firstAt]!;
     reduced.secondGap[k] = first - second;
     upper += first;
   }
@@ -126,7 +128,10 @@ export function solveSingleBudget(layout: BudgetLayout, statedBudget: number, se
       for (let k = 0; k < n; k += 1) setChoice(k, incumbentChoice[k]!);
       return { status: "optimal", choice, bound: Math.max(incumbentValue, pass.bound), budgetMarginalValue: lambda };
     }
-    threshold = Math.min(upper - incumbentValue + tolerance, threshold * 4);
+    // Fourfold wider, or straight to the proof when that would be most of the way there: a pass at
+    // over half the final threshold costs nearly as much as the final pass and rarely shrinks it.
+    const proof = upper - incumbentValue + tolerance;
+    threshold = threshold * 4 >= PROOF_JUMP * proof ? proof : threshold * 4;
   }
 }
 
@@ -135,6 +140,9 @@ const BUDGET_ROUNDING_ALLOWANCE = 1e-11;
 
 /** How much tighter than the incumbent allows the first pass's threshold is. */
 const FIRST_PASS_DIVISOR = 32;
+
+/** A widening that would reach this share of the proof threshold goes to the proof threshold. */
+const PROOF_JUMP = 0.5;
 
 interface PassResult {
   /** Option per canonical group (NO_OPTION for none). */
@@ -145,10 +153,12 @@ interface PassResult {
   readonly bound: number;
 }
 
-/** Per canonical group at lambda: best reduced value, the option giving it, and the runner-up's shortfall. */
+/** Per canonical group at lambda: best reduced value, the option giving it (its cost and value), and the runner-up's shortfall. */
 interface ReducedValues {
   readonly best: Float64Array;
   readonly bestOption: Int32Array;
+  readonly bestCost: Float64Array;
+  readonly bestValue: Float64Array;
   readonly secondGap: Float64Array;
 }
 
@@ -165,7 +175,7 @@ function searchRestricted(
   tolerance: number,
   deadline: number,
 ): PassResult {
-  const { canonical, hulls, groups } = layout;
+  const { canonical, groups } = layout;
   const cost = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.cost);
   const value = (g: number, a: number): number => (a < 0 ? 0 : groups[g]!.options[a]!.value);
   const choice = Int32Array.from(incumbent);
@@ -173,18 +183,21 @@ function searchRestricted(
   const coreCandidates: number[][] = [];
   let fixedCost = 0;
   let fixedValue = 0;
+  const { undominatedStart, undominatedOption, undominatedCost, undominatedValue } = layout;
   for (let k = 0; k < canonical.length; k += 1) {
-    const g = canonical[k]!;
     const held = incumbent[k]!;
     if (held === reduced.bestOption[k] && reduced.secondGap[k]! > threshold) {
-      fixedCost += cost(g, held);
-      fixedValue += value(g, held);
+      fixedCost += reduced.bestCost[k]!;
+      fixedValue += reduced.bestValue[k]!;
       continue;
     }
     coreGroups.push(k);
-    coreCandidates.push(
-      hulls[k]!.undominated.filter((a) => a === held || reduced.best[k]! - (value(g, a) - lambda * cost(g, a)) <= threshold),
-    );
+    const kept: number[] = [];
+    for (let j = undominatedStart[k]!; j < undominatedStart[k + 1]!; j += 1) {
+      const a = undominatedOption[j]!;
+      if (a === held || reduced.best[k]! - (undominatedValue[j]! - lambda * undominatedCost[j]!) <= threshold) kept.push(a);
+    }
+    coreCandidates.push(kept);
   }
   // Groups that cost most to move off their best option go first: few partial programmes survive
   // them, so the states multiply only over the last, cheapest-to-move groups.

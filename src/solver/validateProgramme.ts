@@ -6,9 +6,7 @@ import type { Programme } from "./types.js";
  * programme, so this is a programmer error, not bad user input.
  */
 export function validateProgramme(programme: Programme): void {
-  if (!Number.isFinite(programme.budget) || programme.budget < 0) {
-    throw new RangeError(`programme budget must be a finite number >= 0, got ${programme.budget}`);
-  }
+  validateBudget(programme.budget);
   programme.groups.forEach((group, g) => {
     group.options.forEach((option, a) => {
       if (!Number.isFinite(option.cost) || option.cost < 0) {
@@ -33,5 +31,12 @@ export function validateProgramme(programme: Programme): void {
     if (constraint.coefficients.length > programme.groups.length) {
       throw new RangeError(`constraint ${constraint.id}: more coefficient rows than groups`);
     }
+  }
+}
+
+/** Throws a RangeError unless the budget is a finite number >= 0 (all a budget-only re-solve needs checked). */
+export function validateBudget(budget: number): void {
+  if (!Number.isFinite(budget) || budget < 0) {
+    throw new RangeError(`programme budget must be a finite number >= 0, got ${budget}`);
   }
 }

@@ -1,3 +1,4 @@
+import { cellCmfTable } from "./cellCmfTable.js";
 import { countTreatmentSets } from "./countTreatmentSets.js";
 import { MAX_ALTERNATIVES_PER_SITE, MAX_ALTERNATIVES_TOTAL } from "./countAlternatives.js";
 import { enumerateTreatmentSets } from "./enumerateTreatmentSets.js";
@@ -35,6 +36,8 @@ export function buildAlternatives(scenario: Scenario, baselines: readonly SiteBa
     total += count;
   });
   if (total > MAX_ALTERNATIVES_TOTAL) throw new RangeError(`the sites have ${total} alternatives in all, more than ${MAX_ALTERNATIVES_TOTAL}`);
+  // The same CMFs as treatmentCmf, looked up per cell instead of searched through the effects each time.
+  const cellCmf = cellCmfTable(scenario.catalogue.treatments);
   return scenario.sites.map((site, index) => {
     const rule = rules[index]!;
     if (rule.excludedBy !== undefined) {
@@ -46,7 +49,7 @@ export function buildAlternatives(scenario: Scenario, baselines: readonly SiteBa
     if (!baseline) throw new RangeError(`no baseline for site ${site.id}`);
     return {
       site,
-      alternatives: sets.map((set) => evaluateAlternative(site, set, baseline.expectedPerYear, scenario.economics, undefined, baseline.crashGrowthPerYear)),
+      alternatives: sets.map((set) => evaluateAlternative(site, set, baseline.expectedPerYear, scenario.economics, cellCmf, baseline.crashGrowthPerYear)),
       required: rule.required,
     };
   });

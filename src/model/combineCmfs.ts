@@ -35,11 +35,16 @@ export function combineCmfs(
   cellCmf: CellCmf = treatmentCmf,
   combination: CmfCombination = MULTIPLICATIVE,
 ): number {
+  return combineCmfValues(treatments.map((treatment) => cellCmf(treatment, type, severity)), treatments.length, combination);
+}
+
+/** combineCmfs on the first `count` treatments' CMFs in one cell, given as numbers (in treatment order). */
+export function combineCmfValues(cmfs: ArrayLike<number>, count: number, combination: CmfCombination = MULTIPLICATIVE): number {
   let product = 1;
   let lowest = Infinity;
   let acting = 0;
-  for (const treatment of treatments) {
-    const cmf = cellCmf(treatment, type, severity);
+  for (let i = 0; i < count; i += 1) {
+    const cmf = cmfs[i]!;
     if (cmf === 1) continue;
     product *= cmf;
     if (cmf < lowest) lowest = cmf;

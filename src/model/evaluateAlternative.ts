@@ -1,4 +1,4 @@
-import { actingTreatments, combineCmfs, type CellCmf } from "./combineCmfs.js";
+import { combineCmfValues, type CellCmf } from "./combineCmfs.js";
 import { growingSeriesPresentWorth } from "./growingSeriesPresentWorth.js";
 import { lifecycleCostPV, yearsInService } from "./lifecycleCostPV.js";
 import { treatmentCmf } from "./treatmentCmf.js";
@@ -47,23 +47,38 @@ export function evaluateAlternative(
     (total, t, i) => total + lifecycleCostPV(capital[i]!, t.upkeepPerYear, t.serviceLifeYears, discountRate, horizonYears, renewal),
     0,
   );
-  const inService = (t: Treatment) => yearsInService(t.serviceLifeYears, horizonYears, renewal);
+
+  // The non-empty cells (most of a site's crash matrix is empty) and each treatment's CMF in them,
+  // looked up once: cmfs[c * n + i] for cell c and treatment i.
+  const n = treatments.length;
+  const cellExpected: number[] = [];
+  const cellSeverity: Severity[] = [];
+  const cmfs: number[] = [];
+  for (const type of CRASH_TYPES) {
+    for (const severity of SEVERITIES) {
+      const expected = expectedPerYear[type][severity];
+      if (expected === 0) continue;
+      cellExpected.push(expected);
+      cellSeverity.push(severity);
+      for (const treatment of treatments) cmfs.push(cellCmf(treatment, type, severity));
+    }
+  }
+  const inService = treatments.map((t) => yearsInService(t.serviceLifeYears, horizonYears, renewal));
 
   // Spans of years over which the set of treatments in service does not change.
-  const ends = [...new Set(treatments.map(inService))].sort((a, b) => a - b);
+  const ends = [...new Set(inService)].sort((a, b) => a - b);
+  const active = new Float64Array(n);
   let start = 0;
   let ksiAvoided = 0;
   let benefitPV = 0;
   let firstYear: Record<Severity, number> | undefined;
   for (const end of ends) {
-    const active = treatments.filter((t) => inService(t) >= end);
     const avoided = { K: 0, A: 0, B: 0, C: 0, O: 0 };
-    for (const type of CRASH_TYPES) {
-      for (const severity of SEVERITIES) {
-        const expected = expectedPerYear[type][severity];
-        // Empty cells avoid nothing; skipping them is most of the work saved on sparse crash matrices.
-        if (expected !== 0) avoided[severity] += expected * (1 - combineCmfs(active, type, severity, cellCmf, cmfCombination));
-      }
+    for (let c = 0; c < cellExpected.length; c += 1) {
+      // The CMFs of the treatments in service, in treatment order.
+      let count = 0;
+      for (let i = 0; i < n; i += 1) if (inService[i]! >= end) active[count++] = cmfs[c * n + i]!;
+      avoided[cellSeverity[c]!] += cellExpected[c]! * (1 - combineCmfValues(active, count, cmfCombination));
     }
     firstYear ??= avoided;
     const crashYears = growingSeriesPresentWorth(0, crashGrowthPerYear, start, end);
@@ -71,6 +86,15 @@ export function evaluateAlternative(
     const benefitPerYear = SEVERITIES.reduce((total, severity) => total + avoided[severity] * crashCosts.perCrash[severity], 0);
     benefitPV += benefitPerYear * growingSeriesPresentWorth(discountRate, crashGrowthPerYear, start, end);
     start = end;
+  }
+  // Cells where more than one treatment acts (CMF ≠ 1): their combination rule matters.
+  let sharedCells = 0;
+  if (n > 1) {
+    for (let c = 0; c < cellExpected.length; c += 1) {
+      let acting = 0;
+      for (let i = 0; i < n; i += 1) if (cmfs[c * n + i] !== 1) acting += 1;
+      if (acting > 1) sharedCells += 1;
+    }
   }
 
   return {
@@ -85,20 +109,10 @@ export function evaluateAlternative(
     npv: benefitPV - lifecycle,
     costPerKsi: ksiAvoided > 0 ? lifecycle / ksiAvoided : Infinity,
     effectiveYears: ends[ends.length - 1] ?? 0,
-    sharedCells: treatments.length < 2 ? 0 : countSharedCells(treatments, expectedPerYear, cellCmf),
+    sharedCells,
   };
 }
 
 function scaleSeverities(values: Record<Severity, number>, factor: number): Record<Severity, number> {
   return factor === 1 ? values : { K: values.K * factor, A: values.A * factor, B: values.B * factor, C: values.C * factor, O: values.O * factor };
-}
-
-function countSharedCells(treatments: readonly Treatment[], expectedPerYear: CrashMatrix, cellCmf: CellCmf): number {
-  let shared = 0;
-  for (const type of CRASH_TYPES) {
-    for (const severity of SEVERITIES) {
-      if (expectedPerYear[type][severity] !== 0 && actingTreatments(treatments, type, severity, cellCmf) > 1) shared += 1;
-    }
-  }
-  return shared;
 }

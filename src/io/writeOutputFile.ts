@@ -4,6 +4,7 @@ import { createHash, randomBytes } from "node:crypto";
 import { hostname } from "node:os";
 import { InputError } from "./InputError.js";
 import { runInputAt } from "./runInputs.js";
+import { inBatches } from "./inBatches.js";
 import { writeAllSync } from "./writeAllSync.js";
 import { writeProblem } from "./writeProblems.js";
 
@@ -25,7 +26,7 @@ const TEMPORARY = new RegExp(`^\\..*\\.averta-${HOST}-(\\d+)-[0-9a-f]{8}\\.tmp$`
  * temporaries of processes that no longer run. Never replaces a folder, device, FIFO or socket,
  * nor a file this run has read. `option` names the command-line option that gave the path.
  */
-export function writeOutputFile(file: string, content: string, force: boolean, option = "--out"): void {
+export function writeOutputFile(file: string, content: string | Iterable<string>, force: boolean, option = "--out"): void {
   checkOutputTarget(file, force, option);
   const folder = dirname(file);
   removeStaleTemporaries(folder);
@@ -33,7 +34,7 @@ export function writeOutputFile(file: string, content: string, force: boolean, o
   try {
     const descriptor = openSync(temporary, "wx");
     try {
-      writeAllSync(descriptor, Buffer.from(content, "utf8"));
+      for (const piece of typeof content === "string" ? [content] : inBatches(content)) writeAllSync(descriptor, Buffer.from(piece, "utf8"));
       fsyncSync(descriptor);
     } finally {
       closeSync(descriptor);

@@ -16,6 +16,7 @@ import { justificationTable } from "../../report/justificationTable.js";
 import type { EngineName } from "../../solver/index.js";
 import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
+import { jsonChunks } from "../../report/jsonChunks.js";
 import { solveExitCode, solveStatusNote, type CommandOutcome } from "../solveExitCode.js";
 import { parseAmountOption, parseChoiceOption } from "../parseOptionValues.js";
 
@@ -59,7 +60,7 @@ export function registerPlanCommand(program: Command, io: CliIo, outcome: Comman
       const planCase = format === "csv" || !hasList(result) ? undefined : await casePlan(result, { engine });
       const content =
         format === "json"
-          ? JSON.stringify({ ...planJson(result), justification: planCase ? justificationJson(planCase) : null }, null, 2) + "\n"
+          ? withNewline(jsonChunks({ ...planJson(result), justification: planCase ? justificationJson(planCase) : null }))
           : format === "csv"
             ? planCsv(result)
             : planTable(result, planCase ? [justificationTable(planCase, { all: options.all })] : [], { all: options.all });
@@ -68,4 +69,10 @@ export function registerPlanCommand(program: Command, io: CliIo, outcome: Comman
       io.stderr(solveStatusNote(solution.status, `within ${formatMoney(result.budget)}`, solution.diagnosis, solution.gap));
       outcome.exitCode = solveExitCode([solution.status]);
     });
+}
+
+// The JSON text in pieces, ended by a line break as every output is.
+function* withNewline(chunks: Iterable<string>): Generator<string> {
+  yield* chunks;
+  yield "\n";
 }

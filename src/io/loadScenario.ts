@@ -1,4 +1,3 @@
-import { dirname, isAbsolute, relative, resolve } from "node:path";
 import { completeCrashMatrix } from "../model/crashMatrix.js";
 import { resolveCrashCosts, type StatedCrashCosts } from "../model/resolveCrashCosts.js";
 import type {
@@ -16,12 +15,12 @@ import type {
   SiteKind,
   UncertaintySettings,
 } from "../model/types.js";
-import { allowedInputPath } from "./allowedInputPath.js";
 import { calibrateCatalogue } from "./calibrateCatalogue.js";
 import { checkAlternativeCounts } from "./checkAlternativeCounts.js";
 import { checkScenarioReferences } from "./checkScenarioReferences.js";
 import { InputError, type InputProblem } from "./InputError.js";
-import { loadCatalogue, type LoadedCatalogue } from "./loadCatalogue.js";
+import type { LoadedCatalogue } from "./loadCatalogue.js";
+import { loadListedCatalogues } from "./loadListedCatalogues.js";
 import { loadScenarioSites } from "./loadScenarioSites.js";
 import { parseAmount } from "./parseAmount.js";
 import { readYamlFile, type YamlSource } from "./readYamlFile.js";
@@ -115,37 +114,7 @@ export function loadScenarioSource(source: YamlSource, file: string): LoadedScen
   const located = loadScenarioSites(file, source);
   const raw: RawScenario = { ...(source.data as RawScenario), crashWindow: located.crashWindow, sites: located.sites };
 
-  const seen = new Map<string, number>();
-  const catalogues = raw.catalogues.map((path, index) => {
-    const at = { file: source.file, ...source.positionOf(["catalogues", index]), path: `catalogues[${index}]` };
-    const resolved = resolve(dirname(file), path);
-    const outside = !isAbsolute(path) && !allowedInputPath(file, resolved);
-    if (outside) {
-      throw new InputError([{ code: "catalogue-outside", ...at, message: `catalogue '${path}' lies outside the scenario's folder and every 'catalogs' folder above it (${resolved})`, hint: CATALOGUE_PLACES }]);
-    }
-    const earlier = seen.get(resolved);
-    if (earlier !== undefined) {
-      throw new InputError([{ code: "duplicate-id", ...at, message: `catalogue '${path}' is already listed at catalogues[${earlier}]`, hint: "list each catalogue once" }]);
-    }
-    seen.set(resolved, index);
-    try {
-      return loadCatalogue(resolved, relative(process.cwd(), resolved) || resolved);
-    } catch (error) {
-      // A catalogue that cannot be opened is a mistake in the scenario's list: point there.
-      if (error instanceof InputError && (error.code === "missing-file" || error.code === "not-a-file")) {
-        const missing = error.code === "missing-file";
-        throw new InputError([
-          {
-            ...error.problems[0]!,
-            ...at,
-            message: missing ? `catalogue '${path}' was not found (looked in ${resolved})` : `catalogue '${path}' ${error.problems[0]!.message}`,
-            hint: missing ? "catalogue paths are relative to the scenario file" : "name the catalogue's .yaml file",
-          },
-        ]);
-      }
-      throw error;
-    }
-  });
+  const catalogues = loadListedCatalogues(raw.catalogues, source, file);
   const catalogue: Catalogue = {
     treatments: catalogues.flatMap((loaded) => loaded.catalogue.treatments),
     performanceFunctions: catalogues.flatMap((loaded) => loaded.catalogue.performanceFunctions),
@@ -160,9 +129,6 @@ export function loadScenarioSource(source: YamlSource, file: string): LoadedScen
   if (tooMany.length > 0) throw new InputError(tooMany);
   return { scenario, source, sitesSource, catalogues, warnings: scenarioWarnings(scenario, raw, source, catalogues, sitesSource), notes: scenarioNotes(raw, source, sitesSource) };
 }
-
-const CATALOGUE_PLACES =
-  "a relative catalogue path must stay inside the scenario's folder or a 'catalogs' folder in it or above it (e.g. ../catalogs/x.yaml); give an absolute path to use a catalogue elsewhere";
 
 function amount(value: Amount): number {
   // The schema and reference checks have already rejected anything parseAmount refuses.

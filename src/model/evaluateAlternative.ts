@@ -1,9 +1,10 @@
-import { combineCmfValues, type CellCmf } from "./combineCmfs.js";
-import { growingSeriesPresentWorth } from "./growingSeriesPresentWorth.js";
-import { lifecycleCostPV, yearsInService } from "./lifecycleCostPV.js";
+import { avoidedOverSpans } from "./avoidedOverSpans.js";
+import type { CellCmf } from "./combineCmfs.js";
+import { lifecycleCostPV } from "./lifecycleCostPV.js";
+import { serviceSpans } from "./serviceSpans.js";
 import { treatmentCmf } from "./treatmentCmf.js";
 import { treatmentCapitalCost } from "./treatmentCapitalCost.js";
-import { CRASH_TYPES, KSI_SEVERITIES, SEVERITIES, type Alternative, type CrashMatrix, type Economics, type RenewalRule, type Severity, type Site, type Treatment } from "./types.js";
+import { CRASH_TYPES, SEVERITIES, type Alternative, type CrashMatrix, type Economics, type RenewalRule, type Severity, type Site, type Treatment } from "./types.js";
 import { benefitCostRatio } from "./benefitCostRatio.js";
 
 /** How benefits are counted when treatments in one alternative have different service lives, by renewal rule. */
@@ -28,7 +29,8 @@ export function describeServiceLives(renewal: RenewalRule): string {
  * cells summed over those years. Benefit PV discounts each year's avoided crash costs with the
  * geometric-series present-worth factor over the span the active set is constant. Lifecycle cost
  * = Σ treatments' lifecycleCostPV. `cellCmf` may replace treatmentCmf with a faster lookup of the
- * same values (uncertainty draws).
+ * same values (buildAlternatives). The arithmetic is avoidedOverSpans, which the uncertainty
+ * draws share.
  */
 export function evaluateAlternative(
   site: Site,
@@ -40,7 +42,6 @@ export function evaluateAlternative(
 ): Alternative {
   const { discountRate, horizonYears, crashCosts } = economics;
   const renewal = economics.renewal ?? "none";
-  const cmfCombination = economics.cmfCombination;
   const capital = treatments.map((treatment) => treatmentCapitalCost(treatment, site));
   const cost = capital.reduce((total, amount) => total + amount, 0);
   const lifecycle = treatments.reduce(
@@ -52,41 +53,23 @@ export function evaluateAlternative(
   // looked up once: cmfs[c * n + i] for cell c and treatment i.
   const n = treatments.length;
   const cellExpected: number[] = [];
-  const cellSeverity: Severity[] = [];
+  const cellSeverity: number[] = [];
   const cmfs: number[] = [];
   for (const type of CRASH_TYPES) {
-    for (const severity of SEVERITIES) {
+    SEVERITIES.forEach((severity, s) => {
       const expected = expectedPerYear[type][severity];
-      if (expected === 0) continue;
+      if (expected === 0) return;
       cellExpected.push(expected);
-      cellSeverity.push(severity);
+      cellSeverity.push(s);
       for (const treatment of treatments) cmfs.push(cellCmf(treatment, type, severity));
-    }
+    });
   }
-  const inService = treatments.map((t) => yearsInService(t.serviceLifeYears, horizonYears, renewal));
-
-  // Spans of years over which the set of treatments in service does not change.
-  const ends = [...new Set(inService)].sort((a, b) => a - b);
-  const active = new Float64Array(n);
-  let start = 0;
-  let ksiAvoided = 0;
-  let benefitPV = 0;
-  let firstYear: Record<Severity, number> | undefined;
-  for (const end of ends) {
-    const avoided = { K: 0, A: 0, B: 0, C: 0, O: 0 };
-    for (let c = 0; c < cellExpected.length; c += 1) {
-      // The CMFs of the treatments in service, in treatment order.
-      let count = 0;
-      for (let i = 0; i < n; i += 1) if (inService[i]! >= end) active[count++] = cmfs[c * n + i]!;
-      avoided[cellSeverity[c]!] += cellExpected[c]! * (1 - combineCmfValues(active, count, cmfCombination));
-    }
-    firstYear ??= avoided;
-    const crashYears = growingSeriesPresentWorth(0, crashGrowthPerYear, start, end);
-    ksiAvoided += KSI_SEVERITIES.reduce((total, severity) => total + avoided[severity], 0) * crashYears;
-    const benefitPerYear = SEVERITIES.reduce((total, severity) => total + avoided[severity] * crashCosts.perCrash[severity], 0);
-    benefitPV += benefitPerYear * growingSeriesPresentWorth(discountRate, crashGrowthPerYear, start, end);
-    start = end;
-  }
+  const spans = serviceSpans(treatments.map((t) => t.serviceLifeYears), economics, crashGrowthPerYear);
+  const figures = { ksiAvoided: 0, benefitPV: 0 };
+  const firstYear = new Float64Array(SEVERITIES.length);
+  const costPerCrash = Float64Array.from(SEVERITIES, (severity) => crashCosts.perCrash[severity]);
+  avoidedOverSpans(spans, cellExpected.length, Float64Array.from(cellExpected), Int32Array.from(cellSeverity), Float64Array.from(cmfs), economics.cmfCombination, costPerCrash, new Float64Array(n), figures, firstYear);
+  const { ksiAvoided, benefitPV } = figures;
   // Cells where more than one treatment acts (CMF ≠ 1): their combination rule matters.
   let sharedCells = 0;
   if (n > 1) {
@@ -102,17 +85,18 @@ export function evaluateAlternative(
     treatments: treatments.map((t) => t.id),
     cost,
     lifecycleCostPV: lifecycle,
-    crashesAvoidedPerYear: firstYear === undefined ? { K: 0, A: 0, B: 0, C: 0, O: 0 } : scaleSeverities(firstYear, crashGrowthPerYear),
+    crashesAvoidedPerYear: scaleSeverities(firstYear, crashGrowthPerYear),
     ksiAvoided,
     benefitPV,
     bcRatio: benefitCostRatio(benefitPV, lifecycle),
     npv: benefitPV - lifecycle,
     costPerKsi: ksiAvoided > 0 ? lifecycle / ksiAvoided : Infinity,
-    effectiveYears: ends[ends.length - 1] ?? 0,
+    effectiveYears: spans.ends[spans.ends.length - 1] ?? 0,
     sharedCells,
   };
 }
 
-function scaleSeverities(values: Record<Severity, number>, factor: number): Record<Severity, number> {
-  return factor === 1 ? values : { K: values.K * factor, A: values.A * factor, B: values.B * factor, C: values.C * factor, O: values.O * factor };
+function scaleSeverities(values: Float64Array, factor: number): Record<Severity, number> {
+  const [K, A, B, C, O] = factor === 1 ? values : values.map((value) => value * factor);
+  return { K: K!, A: A!, B: B!, C: C!, O: O! };
 }

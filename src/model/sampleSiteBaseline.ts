@@ -1,10 +1,8 @@
-import { buildCrashMatrix, sumCrashMatrix, totalsBySeverity } from "./crashMatrix.js";
-import { empiricalBayesCrashesPerYear } from "./empiricalBayesCrashesPerYear.js";
-import { empiricalBayesPosterior } from "./empiricalBayesPosterior.js";
-import { sampleGamma } from "./random/sampleGamma.js";
+import { baselineDrawPlan, CELL_COUNT, drawBaselineCells } from "./baselineDraws.js";
+import { buildCrashMatrix } from "./crashMatrix.js";
 import type { RandomSource } from "./random/pcg32.js";
 import type { SiteBaseline } from "./siteBaselines.js";
-import { CRASH_TYPES, KSI_SEVERITIES, SEVERITIES, type CrashMatrix, type CrashType, type SafetyPerformanceFunction, type Severity, type Site } from "./types.js";
+import { CRASH_TYPES, SEVERITIES, type CrashMatrix, type SafetyPerformanceFunction, type Site } from "./types.js";
 
 /** How a site's baseline is drawn; stated in every uncertainty output. */
 export const BASELINE_SAMPLING_RULE =
@@ -15,9 +13,6 @@ export interface SampledBaseline {
   readonly expectedPerYear: CrashMatrix;
   readonly sampled: boolean;
 }
-
-/** Half a crash: the shape the Jeffreys prior adds to a Poisson count. */
-const JEFFREYS_SHAPE = 0.5;
 
 /**
  * One draw of a site's expected crashes per year, by its own baseline method (see
@@ -34,37 +29,8 @@ export function sampleSiteBaseline(
   random: RandomSource,
   spf?: SafetyPerformanceFunction,
 ): SampledBaseline {
-  if (baseline.method === "observed") return { expectedPerYear: sampleObserved(site.crashes, windowYears, random), sampled: true };
-  if (baseline.method === "empirical-bayes") {
-    if (spf === undefined) throw new RangeError(`site ${site.id} has an Empirical Bayes baseline but no performance function was given`);
-    const estimate = empiricalBayesCrashesPerYear(site, spf, windowYears);
-    const posterior = empiricalBayesPosterior(estimate.predictedPerYear, estimate.overdispersion, sumCrashMatrix(site.crashes), windowYears);
-    const scale = sampleGamma(random, posterior.shape, posterior.rate) / (posterior.shape / posterior.rate);
-    return { expectedPerYear: buildCrashMatrix((type, severity) => baseline.expectedPerYear[type][severity] * scale), sampled: true };
-  }
-  return { expectedPerYear: baseline.expectedPerYear, sampled: false };
-}
-
-function sampleObserved(crashes: CrashMatrix, windowYears: number, random: RandomSource): CrashMatrix {
-  const counts = totalsBySeverity(crashes);
-  const drawnRate = {} as Record<Severity, number>;
-  // Every severity draws, in KABCO order, whether or not it saw crashes: one fixed use of the stream.
-  for (const severity of SEVERITIES) drawnRate[severity] = sampleGamma(random, counts[severity] + JEFFREYS_SHAPE, windowYears);
-  const groupMix = { ksi: typeMix(crashes, KSI_SEVERITIES), other: typeMix(crashes, SEVERITIES.filter((s) => !KSI_SEVERITIES.includes(s))) };
-  const allMix = typeMix(crashes, SEVERITIES);
-  return buildCrashMatrix((type, severity) => {
-    const n = counts[severity];
-    if (n > 0) return (crashes[type][severity] / n) * drawnRate[severity];
-    const mix = (KSI_SEVERITIES.includes(severity) ? groupMix.ksi : groupMix.other) ?? allMix;
-    return (mix === undefined ? 1 / CRASH_TYPES.length : mix[type]) * drawnRate[severity];
-  });
-}
-
-/** Each crash type's share of the site's crashes of these severities, or undefined when it has none. */
-function typeMix(crashes: CrashMatrix, severities: readonly Severity[]): Record<CrashType, number> | undefined {
-  const total = sumCrashMatrix(crashes, severities);
-  if (total === 0) return undefined;
-  const mix = {} as Record<CrashType, number>;
-  for (const type of CRASH_TYPES) mix[type] = severities.reduce((sum, severity) => sum + crashes[type][severity], 0) / total;
-  return mix;
+  const cells = new Float64Array(CELL_COUNT);
+  const sampled = drawBaselineCells(baselineDrawPlan(baseline, site, windowYears, spf), random, cells);
+  if (!sampled) return { expectedPerYear: baseline.expectedPerYear, sampled };
+  return { expectedPerYear: buildCrashMatrix((type, severity) => cells[CRASH_TYPES.indexOf(type) * SEVERITIES.length + SEVERITIES.indexOf(severity)]!), sampled };
 }

@@ -1,9 +1,18 @@
-import type { SiteAlternatives } from "../model/buildAlternatives.js";
 import type { Alternative, Objective, PolicyRule, Site } from "../model/types.js";
 import type { Programme, SideConstraint } from "../solver/index.js";
 
+/** The figures of an alternative that the programme uses (an uncertainty draw changes the last two). */
+export type AlternativeFigures = Pick<Alternative, "cost" | "ksiAvoided" | "benefitPV">;
+
+/** A site as the programme sees it: its rules' scope, whether it must be funded, its alternatives' figures. */
+export interface SiteFigures {
+  readonly site: Site;
+  readonly required: boolean;
+  readonly alternatives: readonly AlternativeFigures[];
+}
+
 /** What the optimiser maximises for one alternative. */
-export function objectiveValue(alternative: Alternative, objective: Objective): number {
+export function objectiveValue(alternative: AlternativeFigures, objective: Objective): number {
   return objective === "ksi" ? alternative.ksiAvoided : alternative.benefitPV;
 }
 
@@ -12,7 +21,7 @@ export function objectiveValue(alternative: Alternative, objective: Objective): 
  * its alternatives as options, and one side constraint per spending, KSI-share or count rule.
  */
 export function buildProgramme(
-  sites: readonly SiteAlternatives[],
+  sites: readonly SiteFigures[],
   rules: readonly PolicyRule[],
   objective: Objective,
   budget: number,
@@ -40,10 +49,10 @@ function scopeLabel(rule: { district?: string; tag?: string }): string {
   return "all sites";
 }
 
-function sideConstraint(rule: PolicyRule, index: number, sites: readonly SiteAlternatives[]): SideConstraint[] {
+function sideConstraint(rule: PolicyRule, index: number, sites: readonly SiteFigures[]): SideConstraint[] {
   const id = `rule-${index + 1}-${rule.kind}`;
   // coefficient(alternative, inScope): one row entry per option of every group.
-  const row = (coefficient: (alternative: Alternative, inScope: boolean) => number) =>
+  const row = (coefficient: (alternative: AlternativeFigures, inScope: boolean) => number) =>
     sites.map((entry) => {
       const inScope = rule.kind !== "must-fund" && rule.kind !== "never-fund" && covers(rule, entry.site);
       return entry.alternatives.map((alternative) => coefficient(alternative, inScope));

@@ -1,6 +1,4 @@
-import { lognormalFromMeanSd, sampleLognormal } from "./random/lognormalFromMeanSd.js";
-import type { RandomSource } from "./random/pcg32.js";
-import type { Effect, Scenario, Treatment } from "./types.js";
+import type { Effect, Scenario } from "./types.js";
 
 /**
  * Coefficient of variation given to a CMF that publishes no standard error, when the scenario
@@ -38,24 +36,4 @@ export function cmfSamplingRule(assumedCv: number | "off"): string {
       ? "CMFs without a standard error are held at their value (uncertainty.assumedCmfCv: off)"
       : `a CMF without one is drawn the same way with an assumed standard error of ${assumedCv} × CMF (uncertainty.assumedCmfCv: ${assumedCv}${assumedCv === DEFAULT_ASSUMED_CMF_CV ? ", the default" : ""})`;
   return `each CMF with a published standard error is drawn once per draw from a lognormal whose mean is the CMF and whose standard deviation is its standard error (sigma² = ln(1 + (se/cmf)²), mu = ln(cmf) − sigma²/2), shared by every site; ${without}`;
-}
-
-/**
- * The treatments with every uncertain CMF replaced by one lognormal draw whose mean is the
- * published CMF and whose standard deviation is `drawnStandardError` (the published standard
- * error, else `assumedCv` × CMF); effects held exact keep their CMF. One draw per effect, shared
- * by every site that uses the treatment (the CMF is one unknown quantity, not a site-by-site one).
- * Effects are drawn in catalogue order, so the same random source gives the same CMFs.
- */
-export function sampleTreatmentCmfs(treatments: readonly Treatment[], random: RandomSource, assumedCv: number | "off"): Treatment[] {
-  return treatments.map((treatment) => {
-    if (!treatment.effects.some((effect) => drawnStandardError(effect, assumedCv) > 0)) return treatment;
-    return {
-      ...treatment,
-      effects: treatment.effects.map((effect) => {
-        const standardError = drawnStandardError(effect, assumedCv);
-        return standardError > 0 ? { ...effect, cmf: sampleLognormal(random, lognormalFromMeanSd(effect.cmf, standardError)) } : effect;
-      }),
-    };
-  });
 }

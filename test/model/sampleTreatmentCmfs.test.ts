@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { createPcg32 } from "../../src/model/random/pcg32.js";
-import { assumedCmfCv, cmfSamplingRule, DEFAULT_ASSUMED_CMF_CV, drawnStandardError, sampleTreatmentCmfs } from "../../src/model/sampleTreatmentCmfs.js";
+import { assumedCmfCv, cmfSamplingRule, DEFAULT_ASSUMED_CMF_CV, drawnStandardError } from "../../src/model/sampleTreatmentCmfs.js";
+import { sampleTreatmentCmfs } from "../analysis/uncertainty/referenceDraws.js";
 import type { Effect, Scenario } from "../../src/model/types.js";
 import { treatment } from "./fixtures.js";
 

@@ -1,8 +1,10 @@
+import { drawRandomSource } from "../../model/random/drawRandomSource.js";
 import { checkSolution, type PreparedProgramme, type SolveStatus } from "../../solver/index.js";
-import { buildProgramme } from "../buildProgramme.js";
+import { buildProgramme, type SiteFigures } from "../buildProgramme.js";
 import type { PreparedPlan } from "../preparePlan.js";
+import { drawFigures, type DrawnFigures } from "./drawFigures.js";
 import type { DrawSettings } from "./drawSettings.js";
-import { drawSites } from "./drawSites.js";
+import type { DrawTables } from "./drawTables.js";
 
 /** What one draw says about the chosen list and about the best list for that draw. */
 export interface DrawOutcome {
@@ -23,33 +25,41 @@ export interface DrawOutcome {
 }
 
 /**
- * Draws the sites, evaluates the chosen list `planChoice` on them, and re-solves `solver` (the
- * scenario's programme, prepared once) with the draw's values and rules for the draw's best list.
+ * Draws every alternative's figures (drawFigures on `tables`), evaluates the chosen list
+ * `planChoice` on them, and re-solves `solver` (the scenario's programme, prepared once) with the
+ * draw's values and rules for the draw's best list. Costs and lifecycle costs do not change
+ * between draws, so they are read from the plan's own alternatives.
  */
 export async function evaluateDraw(
   prepared: PreparedPlan,
+  tables: DrawTables,
   solver: PreparedProgramme,
   planChoice: readonly (number | null)[],
   drawIndex: number,
   settings: DrawSettings,
 ): Promise<DrawOutcome> {
-  const sites = drawSites(prepared, drawIndex, settings);
-  const programme = buildProgramme(sites, prepared.scenario.rules, prepared.objective, settings.budget);
-  const solution = await solver.solve({
-    values: programme.groups.map((group) => group.options.map((option) => option.value)),
-    constraints: programme.constraints,
-  });
+  const drawn = drawFigures(tables, prepared.scenario.economics, drawRandomSource(settings.seed, drawIndex));
+  const figures = prepared.objective === "ksi" ? drawn.ksiAvoided : drawn.benefitPV;
+  const values = prepared.sites.map((_entry, group) => Array.from(figures.subarray(tables.offsets[group]!, tables.offsets[group + 1]!)));
+  // Only a K+A share floor's coefficients follow the drawn values; every other rule is the plan's.
+  const constraints = prepared.scenario.rules.some((rule) => rule.kind === "ksi-share-floor")
+    ? buildProgramme(drawnSites(prepared, tables, drawn), prepared.scenario.rules, prepared.objective, settings.budget).constraints
+    : solver.programme.constraints;
+  const solution = await solver.solve({ values, constraints });
   let planKsiAvoided = 0;
   let planBenefitPV = 0;
   let planLifecycleCostPV = 0;
+  let planObjective = 0;
   planChoice.forEach((index, group) => {
     if (index === null) return;
-    const alternative = sites[group]!.alternatives[index]!;
-    planKsiAvoided += alternative.ksiAvoided;
-    planBenefitPV += alternative.benefitPV;
-    planLifecycleCostPV += alternative.lifecycleCostPV;
+    const at = tables.offsets[group]! + index;
+    planKsiAvoided += drawn.ksiAvoided[at]!;
+    planBenefitPV += drawn.benefitPV[at]!;
+    planLifecycleCostPV += prepared.sites[group]!.alternatives[index]!.lifecycleCostPV;
+    planObjective += figures[at]!;
   });
-  const check = checkSolution(programme, planChoice);
+  // Costs are the plan's, so only the constraints can make the plan's list break a rule in a draw.
+  const check = checkSolution({ ...solver.programme, constraints }, planChoice);
   return {
     draw: drawIndex,
     status: solution.status,
@@ -58,7 +68,23 @@ export async function evaluateDraw(
     planKsiAvoided,
     planBenefitPV,
     planLifecycleCostPV,
-    planObjective: check.objective,
+    planObjective,
     planFeasible: check.feasible,
   };
+}
+
+/** The sites with this draw's figures, for the rules whose coefficients follow them. */
+function drawnSites(prepared: PreparedPlan, tables: DrawTables, drawn: DrawnFigures): SiteFigures[] {
+  return prepared.sites.map((entry, group) => {
+    const first = tables.offsets[group]!;
+    return {
+      site: entry.site,
+      required: entry.required,
+      alternatives: entry.alternatives.map((alternative, index) => ({
+        cost: alternative.cost,
+        ksiAvoided: drawn.ksiAvoided[first + index]!,
+        benefitPV: drawn.benefitPV[first + index]!,
+      })),
+    };
+  });
 }

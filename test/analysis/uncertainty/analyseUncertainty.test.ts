@@ -1,9 +1,11 @@
 import { describe, expect, it } from "vitest";
 import { preparePlan } from "../../../src/analysis/preparePlan.js";
 import { analyseUncertainty } from "../../../src/analysis/uncertainty/analyseUncertainty.js";
-import { drawSites } from "../../../src/analysis/uncertainty/drawSites.js";
+import { drawFigures } from "../../../src/analysis/uncertainty/drawFigures.js";
+import { buildDrawTables } from "../../../src/analysis/uncertainty/drawTables.js";
 import { loadScenario } from "../../../src/io/loadScenario.js";
 import { sumCrashMatrix } from "../../../src/model/crashMatrix.js";
+import { drawRandomSource } from "../../../src/model/random/drawRandomSource.js";
 import { empiricalBayesCrashesPerYear } from "../../../src/model/empiricalBayesCrashesPerYear.js";
 import { empiricalBayesPosterior } from "../../../src/model/empiricalBayesPosterior.js";
 import { windowYears } from "../../../src/model/siteBaselines.js";
@@ -97,7 +99,7 @@ describe("analyseUncertainty", () => {
   });
 });
 
-describe("drawSites with Empirical Bayes baselines", () => {
+describe("uncertainty draws with Empirical Bayes baselines", () => {
   it("draws each EB site from its gamma posterior: its K+A avoided averages the plan's within the standard error of relative variance 1/shape", async () => {
     // With CMFs exact, an alternative's K+A avoided is linear in the baseline, so drawn / planned is
     // λ / E[λ] with λ ~ Gamma(1/k + n, 1/(kμ) + T): mean 1 and variance 1/shape (Hauer 1997, ch. 7; HSM 2010 Part C, App. A).
@@ -106,12 +108,13 @@ describe("drawSites with Empirical Bayes baselines", () => {
     const years = windowYears(scenario);
     const spfs = new Map(scenario.catalogue.performanceFunctions.map((spf) => [spf.id, spf]));
     const draws = 400;
-    const settings = { seed: 99, sampleBaselines: true, budget: scenario.budget, solveOptions: {} };
+    const tables = buildDrawTables(prepared, true);
     const sums = prepared.sites.map(() => 0);
     for (let draw = 0; draw < draws; draw += 1) {
-      drawSites(prepared, draw, settings).forEach((entry, index) => {
-        const planned = prepared.sites[index]!.alternatives[0];
-        if (planned !== undefined && planned.ksiAvoided > 0) sums[index]! += entry.alternatives[0]!.ksiAvoided / planned.ksiAvoided;
+      const drawn = drawFigures(tables, prepared.scenario.economics, drawRandomSource(99, draw));
+      prepared.sites.forEach((entry, index) => {
+        const planned = entry.alternatives[0];
+        if (planned !== undefined && planned.ksiAvoided > 0) sums[index]! += drawn.ksiAvoided[tables.offsets[index]!]! / planned.ksiAvoided;
       });
     }
     let checked = 0;

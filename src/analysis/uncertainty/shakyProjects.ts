@@ -45,11 +45,12 @@ export function shakyProjects(plan: PlanResult, outcomes: readonly DrawOutcome[]
   if (draws.length === 0) return [];
   const sites = plan.prepared.sites;
   const planChoice = plan.solution.choice;
+  const tally = departureTally(plan, draws);
   const shaky: ShakyProject[] = [];
   planChoice.forEach((index, group) => {
     if (index === null) return;
-    const without = draws.filter((outcome) => outcome.choice[group] !== index);
-    const probability = (draws.length - without.length) / draws.length;
+    const kept = draws.flatMap((outcome, d) => (outcome.choice[group] === index ? [d] : []));
+    const probability = kept.length / draws.length;
     if (probability >= SHAKY_PROBABILITY) return;
     const alternative = sites[group]!.alternatives[index]!;
     shaky.push({
@@ -58,37 +59,56 @@ export function shakyProjects(plan: PlanResult, outcomes: readonly DrawOutcome[]
       treatments: alternative.treatments,
       cost: alternative.cost,
       probability,
-      drawsWithout: without.length,
-      replacements: replacementsFor(plan, draws, group, index, alternative.cost),
+      drawsWithout: draws.length - kept.length,
+      replacements: replacementsFor(plan, tally, kept, draws.length, alternative.cost),
     });
   });
   return shaky.sort((a, b) => b.cost - a.cost || (a.site < b.site ? -1 : a.site > b.site ? 1 : 0));
 }
 
-function replacementsFor(plan: PlanResult, draws: readonly DrawOutcome[], group: number, index: number, cost: number): Replacement[] {
-  const sites = plan.prepared.sites;
+/**
+ * Where the draws' best lists depart from the plan: per draw, the flat indices (site offset +
+ * alternative) of the alternatives it selects that the plan does not, and how many draws select
+ * each. Best lists differ from the plan at a few sites, so this is small beside draws × sites.
+ */
+interface DepartureTally {
+  readonly offsets: readonly number[];
+  readonly departures: readonly Int32Array[];
+  readonly totals: Int32Array;
+}
+
+function departureTally(plan: PlanResult, draws: readonly DrawOutcome[]): DepartureTally {
   const planChoice = plan.solution.choice;
-  const tally = () => sites.map((entry) => new Array<number>(entry.alternatives.length).fill(0));
-  const without = tally();
-  const withIt = tally();
-  let drawsWithout = 0;
-  for (const outcome of draws) {
-    const kept = outcome.choice[group] === index;
-    if (!kept) drawsWithout += 1;
+  const offsets = [0];
+  for (const entry of plan.prepared.sites) offsets.push(offsets[offsets.length - 1]! + entry.alternatives.length);
+  const totals = new Int32Array(offsets[offsets.length - 1]!);
+  const departures = draws.map((outcome) => {
+    const flat: number[] = [];
     outcome.choice.forEach((chosen, g) => {
-      if (chosen !== null && chosen !== planChoice[g]) (kept ? withIt : without)[g]![chosen]! += 1;
+      if (chosen !== null && chosen !== planChoice[g]) flat.push(offsets[g]! + chosen);
     });
-  }
-  const drawsWith = draws.length - drawsWithout;
+    for (const at of flat) totals[at]! += 1;
+    return Int32Array.from(flat);
+  });
+  return { offsets, departures, totals };
+}
+
+// `kept`: the draws (indices into the solved draws) whose best list keeps the shaky project.
+function replacementsFor(plan: PlanResult, tally: DepartureTally, kept: readonly number[], drawCount: number, cost: number): Replacement[] {
+  const sites = plan.prepared.sites;
+  const withIt = new Int32Array(tally.totals.length);
+  for (const d of kept) for (const at of tally.departures[d]!) withIt[at]! += 1;
+  const drawsWith = kept.length;
+  const drawsWithout = drawCount - drawsWith;
   const ranked: { readonly replacement: Replacement; readonly rise: number }[] = [];
-  without.forEach((row, g) =>
-    row.forEach((count, i) => {
-      const shareOfDrawsWithout = count / drawsWithout;
-      const shareOfDrawsWith = drawsWith > 0 ? withIt[g]![i]! / drawsWith : null;
+  sites.forEach((entry, g) =>
+    entry.alternatives.forEach((alternative, i) => {
+      const at = tally.offsets[g]! + i;
+      const shareOfDrawsWithout = (tally.totals[at]! - withIt[at]!) / drawsWithout;
+      const shareOfDrawsWith = drawsWith > 0 ? withIt[at]! / drawsWith : null;
       const rise = shareOfDrawsWithout - (shareOfDrawsWith ?? 0);
       if (!(rise > 0)) return;
-      const alternative = sites[g]!.alternatives[i]!;
-      ranked.push({ replacement: { site: sites[g]!.site.id, alternativeIndex: i, treatments: alternative.treatments, cost: alternative.cost, shareOfDrawsWithout, shareOfDrawsWith }, rise });
+      ranked.push({ replacement: { site: entry.site.id, alternativeIndex: i, treatments: alternative.treatments, cost: alternative.cost, shareOfDrawsWithout, shareOfDrawsWith }, rise });
     }),
   );
   // Ties: the cheaper alternative first, then site order, so the list is the same on every machine.

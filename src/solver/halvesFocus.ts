@@ -4,6 +4,12 @@ import type { Programme } from "./types.js";
 /** Most programmes per half of the focused search: it runs between HiGHS slices, so it stays well under a second. */
 const FOCUS_HALF_LIMIT = 1 << 18;
 
+/** How far round the groups each focus round after the first starts. */
+const FOCUS_ROUND_STEP = 5;
+
+/** Most focus rounds between two HiGHS runs; the rounds stop earlier once one brings no gain. */
+export const FOCUS_ROUNDS = 12;
+
 // What option a of group g puts on row r: row 0 is the budget (its cost), row r > 0 side constraint r − 1.
 function rowUse(programme: Programme, r: number, g: number, a: number): number {
   if (a === NO_OPTION) return 0;
@@ -37,18 +43,29 @@ export function bindingRow(programme: Programme, choices: readonly (readonly num
   return bestRow;
 }
 
-// The restriction with every group held at the incumbent's choice except those that move the sort
-// row most, as many as fit in two halves of FOCUS_HALF_LIMIT programmes (split as `searchCoreByHalves` splits).
-export function focusChoices(programme: Programme, choices: readonly (readonly number[])[], held: readonly (number | null)[], sortRow: number): number[][] {
+/**
+ * The restriction with every group held at the incumbent's choice except a few that move the
+ * sort row, as many as fit in two halves of FOCUS_HALF_LIMIT programmes (largest first into the
+ * smaller half, as `searchCoreByHalves` splits them). Round 0 frees the groups with the most
+ * choices; round r > 0 takes the groups by spread on the sort row, largest first, starting r × step
+ * places further round the list, so successive rounds free different groups (a large-neighbourhood
+ * search whose every neighbourhood is searched exactly).
+ */
+export function focusChoices(programme: Programme, choices: readonly (readonly number[])[], held: readonly (number | null)[], sortRow: number, round = 0): number[][] {
   const spread = choices.map((allowed, g) => {
     const uses = allowed.map((a) => rowUse(programme, sortRow, g, a));
     return allowed.length < 2 ? 0 : Math.max(...uses) - Math.min(...uses);
   });
   const wanted = choices.map((_, g) => g).filter((g) => choices[g]!.length > 1).sort((x, y) => spread[y]! - spread[x]! || x - y);
+  const start = wanted.length === 0 ? 0 : (round * FOCUS_ROUND_STEP) % wanted.length;
+  const order =
+    round === 0
+      ? [...wanted].sort((x, y) => choices[y]!.length - choices[x]!.length || spread[y]! - spread[x]! || x - y)
+      : [...wanted.slice(start), ...wanted.slice(0, start)];
   const picked = new Set<number>();
   const sizes = [1, 1];
-  // Largest first into the smaller half, as the search splits them; a group that fits in neither is left out.
-  for (const g of [...wanted].sort((x, y) => choices[y]!.length - choices[x]!.length || spread[y]! - spread[x]! || x - y)) {
+  // A group that fits in neither half is left out.
+  for (const g of order) {
     const h = sizes[0]! <= sizes[1]! ? 0 : 1;
     if (sizes[h]! * choices[g]!.length > FOCUS_HALF_LIMIT) continue;
     sizes[h] = sizes[h]! * choices[g]!.length;

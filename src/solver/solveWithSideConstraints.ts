@@ -5,7 +5,7 @@ import { checkSolution } from "./checkSolution.js";
 import { propagateRows } from "./propagateRows.js";
 import { relaxationMultipliers } from "./relaxationMultipliers.js";
 import { runHighs } from "./runHighs.js";
-import { bindingRow, focusChoices } from "./halvesFocus.js";
+import { bindingRow, FOCUS_ROUNDS, focusChoices } from "./halvesFocus.js";
 import { HALF_LIMIT, searchCoreByHalves, type CoreSearch, type CoreSearchResult } from "./searchCoreByHalves.js";
 import { OPTIMALITY_TOLERANCE } from "./solveSingleBudget.js";
 import type { EngineResult, Programme, SolveOptions } from "./types.js";
@@ -22,8 +22,12 @@ export const MAX_REJECTED_ANSWERS = 20;
 /** Groups with exactly tied choices from which the restriction counts as a subset-sum and gets the halves search on a part. */
 const MIN_TIED_GROUPS = 4;
 
-/** Branch-and-bound nodes of the short first HiGHS run on a restriction with ties (about a second). */
-const SLICE_NODES = 1_000;
+/**
+ * Branch-and-bound nodes of the short HiGHS runs on a restriction with ties, in turn: a very
+ * short one for a first programme to search around, then a longer one (about a second on most
+ * restrictions, ten on some), before HiGHS runs to the time limit.
+ */
+const SLICE_NODES = [10, 1_000];
 
 /** Largest half listed when no subset-sum is suspected: cheap next to a HiGHS run. */
 const SMALL_HALF_LIMIT = 1 << 12;
@@ -109,7 +113,9 @@ export function solveWithSideConstraints(
   // Proven bound on programmes inside the current restriction, when a pass stops unfinished.
   let restrictedBound = Number.POSITIVE_INFINITY;
   const rejected: (number | null)[][] = [];
+  // How many short HiGHS runs the current threshold has had.
   let slicedAt = Number.NaN;
+  let slices = 0;
   const accept = (choice: (number | null)[]): boolean => {
     const check = checkSolution(programme, choice);
     if (check.feasible && (incumbent === undefined || check.objective > incumbent.objective)) {
@@ -138,6 +144,8 @@ export function solveWithSideConstraints(
 
   for (;;) {
     restrictedBound = Number.POSITIVE_INFINITY;
+    // The Lagrangian bound holds for every programme: an incumbent within tolerance of it is optimal.
+    if (incumbent !== undefined && upper - incumbent.objective <= tolerance) return proven(incumbent.objective);
     if (secondsLeft() <= 0) return stop("time limit");
     // Only options within U - z of their group's best can be in a programme better than the incumbent z.
     if (incumbent !== undefined && upper - incumbent.objective + tolerance < threshold) threshold = upper - incumbent.objective + tolerance;
@@ -191,12 +199,17 @@ export function solveWithSideConstraints(
     // search improves its programme on the groups that move the binding row most (which narrows the
     // restriction) before HiGHS goes on.
     const model = buildRestrictedModel(highs, programme, choices, rejected);
-    const slice = degenerate && exhaustive.status === "too-large" && slicedAt !== threshold;
-    if (slice) slicedAt = threshold;
+    if (slicedAt !== threshold) slices = 0;
+    const slice = degenerate && exhaustive.status === "too-large" && slices < SLICE_NODES.length;
+    const sliceNodes = SLICE_NODES[slices];
+    if (slice) {
+      slicedAt = threshold;
+      slices += 1;
+    }
     const run = runHighs(highs, model.data, {
       timeLimitSeconds: secondsLeft(),
       // Limited by nodes, not seconds, so the answer does not depend on the machine.
-      ...(slice ? { maxNodes: SLICE_NODES } : {}),
+      ...(slice ? { maxNodes: sliceNodes } : {}),
       relativeGap: settings.relativeGap,
       absoluteGap: tolerance,
       ...(incumbent === undefined ? {} : { start: model.start(incumbent.choice) }),
@@ -214,8 +227,10 @@ export function solveWithSideConstraints(
     if (run.status === "time-limit") {
       if (Number.isFinite(runBound)) restrictedBound = runBound;
       if (!slice || secondsLeft() <= 0) return stop("time limit");
-      if (incumbent !== undefined) {
-        const focused = focusChoices(programme, choices, incumbent.choice, sortRow);
+      // Then exact searches of neighbourhoods of the incumbent, until one brings nothing or the
+      // Lagrangian bound proves it (in a subset-sum near-exact fills are many, but HiGHS rarely finds one).
+      for (let round = 0; round < FOCUS_ROUNDS && incumbent !== undefined && upper - incumbent.objective > tolerance && secondsLeft() > 0; round += 1) {
+        const focused = focusChoices(programme, choices, incumbent.choice, sortRow, round);
         const improved = coreSearch({ programme, choices: focused, sortRow, floor: incumbent.objective, tolerance, deadline });
         if (improved.choice !== undefined) accept(improved.choice);
       }

@@ -39,10 +39,17 @@ export function avoidedOverSpans(
   for (let k = 0; k < spans.ends.length; k += 1) {
     const end = spans.ends[k]!;
     avoided.fill(0);
+    let allInService = true;
+    for (let i = 0; i < n; i += 1) if (spans.inService[i]! < end) allInService = false;
     for (let c = 0; c < cellCount; c += 1) {
-      let count = 0;
-      for (let i = 0; i < n; i += 1) if (spans.inService[i]! >= end) active[count++] = cmfs[c * n + i]!;
-      avoided[cellSeverity[c]!]! += cellExpected[c]! * (1 - combineCmfValues(active, count, combination));
+      let combined: number;
+      if (allInService) combined = combineCmfValues(cmfs, n, combination, c * n);
+      else {
+        let count = 0;
+        for (let i = 0; i < n; i += 1) if (spans.inService[i]! >= end) active[count++] = cmfs[c * n + i]!;
+        combined = combineCmfValues(active, count, combination);
+      }
+      avoided[cellSeverity[c]!]! += cellExpected[c]! * (1 - combined);
     }
     if (k === 0 && avoidedFirstYear !== undefined) avoidedFirstYear.set(avoided);
     ksiAvoided += (0 + avoided[0]! + avoided[1]!) * spans.crashYears[k]!;

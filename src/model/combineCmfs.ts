@@ -38,12 +38,12 @@ export function combineCmfs(
   return combineCmfValues(treatments.map((treatment) => cellCmf(treatment, type, severity)), treatments.length, combination);
 }
 
-/** combineCmfs on the first `count` treatments' CMFs in one cell, given as numbers (in treatment order). */
-export function combineCmfValues(cmfs: ArrayLike<number>, count: number, combination: CmfCombination = MULTIPLICATIVE): number {
+/** combineCmfs on `count` treatments' CMFs in one cell, given as numbers from `cmfs[offset]` on (in treatment order). */
+export function combineCmfValues(cmfs: ArrayLike<number>, count: number, combination: CmfCombination = MULTIPLICATIVE, offset = 0): number {
   let product = 1;
   let lowest = Infinity;
   let acting = 0;
-  for (let i = 0; i < count; i += 1) {
+  for (let i = offset; i < offset + count; i += 1) {
     const cmf = cmfs[i]!;
     if (cmf === 1) continue;
     product *= cmf;

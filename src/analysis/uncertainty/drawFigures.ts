@@ -16,8 +16,11 @@ export interface DrawnFigures {
  * by its own method (site order), then every alternative's figures through the model's own
  * avoidedOverSpans, on the same numbers in the same order as the plan evaluates them, so a draw
  * whose factors were all 1 would reproduce the plan exactly. Costs do not change between draws.
+ * With `benefitNeeded` (1 per flat alternative index that needs it), the others get only their
+ * K+A avoided, from their K and A cells (the same sums), and benefit NaN: a K+A objective needs
+ * benefits for the plan's own list only.
  */
-export function drawFigures(tables: DrawTables, economics: Economics, random: RandomSource): DrawnFigures {
+export function drawFigures(tables: DrawTables, economics: Economics, random: RandomSource, benefitNeeded?: Uint8Array): DrawnFigures {
   const effectCmf = tables.pointCmf.slice();
   tables.drawnEffects.forEach((effect, k) => (effectCmf[effect] = sampleLognormal(random, tables.lognormals[k]!)));
   const costPerCrash = Float64Array.from(SEVERITIES, (severity) => economics.crashCosts.perCrash[severity]);
@@ -40,9 +43,10 @@ export function drawFigures(tables: DrawTables, economics: Economics, random: Ra
         actingSeverity[j] = actingCells[j]! % SEVERITIES.length;
       }
       for (let k = 0; k < effects.length; k += 1) cmfs[k] = effects[k]! < 0 ? 1 : effectCmf[effects[k]!]!;
-      avoidedOverSpans(alternative.spans, actingCells.length, actingExpected, actingSeverity, cmfs, economics.cmfCombination, costPerCrash, active, out);
+      const full = benefitNeeded === undefined || benefitNeeded[at] === 1;
+      avoidedOverSpans(alternative.spans, full ? actingCells.length : alternative.ksiCellCount, actingExpected, actingSeverity, cmfs, economics.cmfCombination, costPerCrash, active, out);
       figures.ksiAvoided[at] = out.ksiAvoided;
-      figures.benefitPV[at] = out.benefitPV;
+      figures.benefitPV[at] = full ? out.benefitPV : Number.NaN;
       at += 1;
     }
   }

@@ -3,7 +3,7 @@ import { lognormalFromMeanSd, type LognormalParameters } from "../../model/rando
 import { assumedCmfCv, drawnStandardError } from "../../model/sampleTreatmentCmfs.js";
 import { serviceSpans, type ServiceSpans } from "../../model/serviceSpans.js";
 import { windowYears } from "../../model/siteBaselines.js";
-import { CRASH_TYPES, SEVERITIES } from "../../model/types.js";
+import { CRASH_TYPES, KSI_SEVERITIES, SEVERITIES } from "../../model/types.js";
 import type { PreparedPlan } from "../preparePlan.js";
 
 /**
@@ -14,7 +14,10 @@ import type { PreparedPlan } from "../preparePlan.js";
  */
 export interface DrawAlternative {
   readonly spans: ServiceSpans;
+  /** Acting cells, the K and A ones first (each severity's cells stay in cell order, so its sums are unchanged). */
   readonly actingCells: Int32Array;
+  /** How many of the acting cells are K or A: all that K+A avoided needs. */
+  readonly ksiCellCount: number;
   readonly effects: Int32Array;
 }
 
@@ -96,16 +99,12 @@ export function buildDrawTables(prepared: PreparedPlan, sampleBaselines: boolean
       pointCells,
       alternatives: entry.alternatives.map((alternative) => {
         const ids = alternative.treatments.map((id) => treatmentIndex.get(id)!);
-        const actingCells: number[] = [];
-        const effects: number[] = [];
-        cells.forEach((cell) => {
-          const cellEffects = ids.map((t) => cellEffect[t * CELL_COUNT + cell]!);
-          if (cellEffects.every((effect) => effect === -1)) return;
-          actingCells.push(cell);
-          effects.push(...cellEffects);
-        });
+        const acting = cells.filter((cell) => ids.some((t) => cellEffect[t * CELL_COUNT + cell] !== -1));
+        const isKsi = (cell: number) => KSI_SEVERITIES.includes(SEVERITIES[cell % SEVERITIES.length]!);
+        const actingCells = [...acting.filter(isKsi), ...acting.filter((cell) => !isKsi(cell))];
+        const effects = actingCells.flatMap((cell) => ids.map((t) => cellEffect[t * CELL_COUNT + cell]!));
         const spans = serviceSpans(ids.map((t) => treatments[t]!.serviceLifeYears), scenario.economics, point.crashGrowthPerYear);
-        return { spans, actingCells: Int32Array.from(actingCells), effects: Int32Array.from(effects) };
+        return { spans, actingCells: Int32Array.from(actingCells), ksiCellCount: acting.filter(isKsi).length, effects: Int32Array.from(effects) };
       }),
     });
   });

@@ -38,7 +38,15 @@ export async function evaluateDraw(
   drawIndex: number,
   settings: DrawSettings,
 ): Promise<DrawOutcome> {
-  const drawn = drawFigures(tables, prepared.scenario.economics, drawRandomSource(settings.seed, drawIndex));
+  // A K+A objective needs benefits only for the plan's own list (its benefit in the draw).
+  let benefitNeeded: Uint8Array | undefined;
+  if (prepared.objective === "ksi") {
+    benefitNeeded = new Uint8Array(tables.offsets[tables.offsets.length - 1]!);
+    planChoice.forEach((index, group) => {
+      if (index !== null) benefitNeeded![tables.offsets[group]! + index] = 1;
+    });
+  }
+  const drawn = drawFigures(tables, prepared.scenario.economics, drawRandomSource(settings.seed, drawIndex), benefitNeeded);
   const figures = prepared.objective === "ksi" ? drawn.ksiAvoided : drawn.benefitPV;
   const values = prepared.sites.map((_entry, group) => Array.from(figures.subarray(tables.offsets[group]!, tables.offsets[group + 1]!)));
   // Only a K+A share floor's coefficients follow the drawn values; every other rule is the plan's.

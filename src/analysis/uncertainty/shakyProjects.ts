@@ -75,6 +75,8 @@ interface DepartureTally {
   readonly offsets: readonly number[];
   readonly departures: readonly Int32Array[];
   readonly totals: Int32Array;
+  /** The site and alternative of every flat index some draw departs to, in site then alternative order. */
+  readonly departedTo: readonly { readonly g: number; readonly i: number; readonly at: number }[];
 }
 
 function departureTally(plan: PlanResult, draws: readonly DrawOutcome[]): DepartureTally {
@@ -90,7 +92,8 @@ function departureTally(plan: PlanResult, draws: readonly DrawOutcome[]): Depart
     for (const at of flat) totals[at]! += 1;
     return Int32Array.from(flat);
   });
-  return { offsets, departures, totals };
+  const departedTo = plan.prepared.sites.flatMap((entry, g) => entry.alternatives.flatMap((_, i) => (totals[offsets[g]! + i]! > 0 ? [{ g, i, at: offsets[g]! + i }] : [])));
+  return { offsets, departures, totals, departedTo };
 }
 
 // `kept`: the draws (indices into the solved draws) whose best list keeps the shaky project.
@@ -101,16 +104,15 @@ function replacementsFor(plan: PlanResult, tally: DepartureTally, kept: readonly
   const drawsWith = kept.length;
   const drawsWithout = drawCount - drawsWith;
   const ranked: { readonly replacement: Replacement; readonly rise: number }[] = [];
-  sites.forEach((entry, g) =>
-    entry.alternatives.forEach((alternative, i) => {
-      const at = tally.offsets[g]! + i;
-      const shareOfDrawsWithout = (tally.totals[at]! - withIt[at]!) / drawsWithout;
-      const shareOfDrawsWith = drawsWith > 0 ? withIt[at]! / drawsWith : null;
-      const rise = shareOfDrawsWithout - (shareOfDrawsWith ?? 0);
-      if (!(rise > 0)) return;
-      ranked.push({ replacement: { site: entry.site.id, alternativeIndex: i, treatments: alternative.treatments, cost: alternative.cost, shareOfDrawsWithout, shareOfDrawsWith }, rise });
-    }),
-  );
+  // An alternative no draw departs to has no rise: only those some draw does are ranked.
+  for (const { g, i, at } of tally.departedTo) {
+    const shareOfDrawsWithout = (tally.totals[at]! - withIt[at]!) / drawsWithout;
+    const shareOfDrawsWith = drawsWith > 0 ? withIt[at]! / drawsWith : null;
+    const rise = shareOfDrawsWithout - (shareOfDrawsWith ?? 0);
+    if (!(rise > 0)) continue;
+    const alternative = sites[g]!.alternatives[i]!;
+    ranked.push({ replacement: { site: sites[g]!.site.id, alternativeIndex: i, treatments: alternative.treatments, cost: alternative.cost, shareOfDrawsWithout, shareOfDrawsWith }, rise });
+  }
   // Ties: the cheaper alternative first, then site order, so the list is the same on every machine.
   const order = (a: Replacement, b: Replacement) => a.cost - b.cost || (a.site < b.site ? -1 : a.site > b.site ? 1 : 0) || a.alternativeIndex - b.alternativeIndex;
   ranked.sort((a, b) => b.rise - a.rise || order(a.replacement, b.replacement));

@@ -35,7 +35,11 @@ const tally = tallyBench();
 console.log(tally.summary);
 
 console.log("\nUncertainty: draws with re-optimisation in each (plan included, sensitivity excluded)");
-const uncertainty = await uncertaintyBench();
+// The previous release's checkout, built (npm run build there), for the figures beside the targets.
+const previousRelease = process.env.BENCH_PREVIOUS_RELEASE;
+const previousUncertainty =
+  previousRelease === undefined ? undefined : ((await import(`${previousRelease}/dist/bench/uncertaintyBench.js`)) as typeof import("./uncertaintyBench.js")).uncertaintyBench;
+const uncertainty = await uncertaintyBench({}, previousUncertainty);
 
 writeFileSync("bench-results/pipeline.json", `${JSON.stringify({ machine, plan, tally, uncertainty }, null, 2)}\n`);
 console.log("\nwritten: bench-results/pipeline.json");

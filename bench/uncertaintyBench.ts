@@ -39,11 +39,18 @@ async function timeRun(name: string, scenario: Scenario, options: UncertaintyBen
   return { name, sites: scenario.sites.length, draws: options.draws, threads: options.threads, seconds, drawsPerSecond: options.draws / seconds, solvedDraws: result.summary.solvedDraws };
 }
 
+/** Wall-clock target of the generated run (2,000 sites x 1,000 draws, 2 threads), and its speed-up on the previous release. */
+export const UNCERTAINTY_TARGET_SECONDS = 30;
+export const UNCERTAINTY_TARGET_SPEEDUP = 5;
+
 /**
  * Times uncertainty runs with re-optimisation in every draw (plan solve included, sensitivity
  * excluded) on the demo and on a generated scenario, prints one line each and returns the figures.
+ * With `previous`, the previous release's own uncertaintyBench (same scenarios, seed and threads,
+ * from its built checkout) runs right after, in the same process, and the generated run's
+ * figure is printed beside it with the speed-up.
  */
-export async function uncertaintyBench(settings: Partial<UncertaintyBenchOptions> = {}): Promise<UncertaintyBenchResult[]> {
+export async function uncertaintyBench(settings: Partial<UncertaintyBenchOptions> = {}, previous?: typeof uncertaintyBench): Promise<UncertaintyBenchResult[]> {
   const options: UncertaintyBenchOptions = { draws: 1000, generatedSites: 2000, threads: availableParallelism(), ...settings };
   const { scenario } = loadScenario("scenarios/demo.yaml");
   const results: UncertaintyBenchResult[] = [];
@@ -57,5 +64,12 @@ export async function uncertaintyBench(settings: Partial<UncertaintyBenchOptions
     );
     results.push(result);
   }
+  const generated = results[results.length - 1]!;
+  let comparison = "previous release: not run (set BENCH_PREVIOUS_RELEASE to its built checkout)";
+  if (previous !== undefined) {
+    const before = (await previous(options)).at(-1)!;
+    comparison = `previous release ${before.seconds.toFixed(1)} s, ${(before.seconds / generated.seconds).toFixed(1)}x faster (target >= ${UNCERTAINTY_TARGET_SPEEDUP}x)`;
+  }
+  console.log(`  generated run: ${generated.seconds.toFixed(1)} s (target <= ${UNCERTAINTY_TARGET_SECONDS} s on 2 threads); ${comparison}`);
   return results;
 }

@@ -1,5 +1,6 @@
 import { dirname, isAbsolute, relative, resolve } from "node:path";
 import { allowedInputPath } from "./allowedInputPath.js";
+import { atReference } from "./atReference.js";
 import { InputError } from "./InputError.js";
 import { loadCatalogue, type LoadedCatalogue } from "./loadCatalogue.js";
 import type { YamlSource } from "./readYamlFile.js";
@@ -26,22 +27,11 @@ export function loadListedCatalogues(paths: readonly string[], source: YamlSourc
       throw new InputError([{ code: "duplicate-id", ...at, message: `catalogue '${path}' is already listed at catalogues[${earlier}]`, hint: "list each catalogue once" }]);
     }
     seen.set(resolved, index);
-    try {
-      return loadCatalogue(resolved, relative(process.cwd(), resolved) || resolved);
-    } catch (error) {
-      // A catalogue that cannot be opened is a mistake in the scenario's list: point there.
-      if (error instanceof InputError && (error.code === "missing-file" || error.code === "not-a-file")) {
-        const missing = error.code === "missing-file";
-        throw new InputError([
-          {
-            ...error.problems[0]!,
-            ...at,
-            message: missing ? `catalogue '${path}' was not found (looked in ${resolved})` : `catalogue '${path}' ${error.problems[0]!.message}`,
-            hint: missing ? "catalogue paths are relative to the scenario file" : "name the catalogue's .yaml file",
-          },
-        ]);
-      }
-      throw error;
-    }
+    return atReference(() => loadCatalogue(resolved, relative(process.cwd(), resolved) || resolved), at, {
+      label: `catalogue '${path}'`,
+      resolved,
+      missingHint: "catalogue paths are relative to the scenario file",
+      notAFileHint: "name the catalogue's .yaml file",
+    });
   });
 }

@@ -1,6 +1,7 @@
 import { realpathSync } from "node:fs";
 import { dirname, isAbsolute, relative, resolve } from "node:path";
 import { allowedInputPath } from "./allowedInputPath.js";
+import { atReference } from "./atReference.js";
 import { closestName } from "./closestName.js";
 import { InputError, type InputProblem } from "./InputError.js";
 import type { RawScenario } from "./loadScenario.js";
@@ -106,24 +107,12 @@ function readSitesFile(scenarioFile: string, path: string, at: Omit<InputProblem
   if (realPath(resolved) === realPath(resolve(scenarioFile))) {
     throw new InputError([{ code: "sites-self", ...at, message: "names the scenario itself as its sites file", hint: "name the file averta tally wrote, or list the sites here" }]);
   }
-  let source: YamlSource;
-  try {
-    source = readYamlFile(resolved, relative(process.cwd(), resolved) || resolved);
-  } catch (error) {
-    // A sites file that cannot be opened is a mistake in the scenario: point there.
-    if (error instanceof InputError && (error.code === "missing-file" || error.code === "not-a-file")) {
-      const missing = error.code === "missing-file";
-      throw new InputError([
-        {
-          ...error.problems[0]!,
-          ...at,
-          message: missing ? `sites file '${path}' was not found (looked in ${resolved})` : `sites file '${path}' ${error.problems[0]!.message}`,
-          hint: missing ? "the sites path is relative to the scenario file; averta tally --out writes one" : "name the sites .yaml file",
-        },
-      ]);
-    }
-    throw error;
-  }
+  const source = atReference(() => readYamlFile(resolved, relative(process.cwd(), resolved) || resolved), at, {
+    label: `sites file '${path}'`,
+    resolved,
+    missingHint: "the sites path is relative to the scenario file; averta tally --out writes one",
+    notAFileHint: "name the sites .yaml file",
+  });
   const problems = validateWithSchema(source, "sites");
   if (problems.length > 0) throw new InputError(problems);
   return source;

@@ -28,10 +28,14 @@ export async function budgetFrontier(
 ): Promise<FrontierLevel[]> {
   const frontier: FrontierLevel[] = [];
   if (levels.length === 0) return frontier;
-  const solver = prepareProgramme(buildProgramme(prepared.sites, prepared.scenario.rules, prepared.objective, levels[0]!), solveOptions);
+  const { rules, programme: years } = prepared.scenario;
+  const build = (budget: number) => buildProgramme(prepared.sites, rules, prepared.objective, budget, years);
+  const solver = prepareProgramme(build(levels[0]!), solveOptions);
   for (const budget of levels) {
-    const solution = await solver.solve({ budget });
-    frontier.push({ budget, plan: assemblePlan(prepared, budget, { ...solver.programme, budget }, solution) });
+    // In a multi-year programme every year's budget row scales with the level.
+    const constraints = years === undefined ? solver.programme.constraints : build(budget).constraints;
+    const solution = await solver.solve(years === undefined ? { budget } : { budget, constraints });
+    frontier.push({ budget, plan: assemblePlan(prepared, budget, { ...solver.programme, budget, constraints }, solution) });
   }
   return frontier;
 }

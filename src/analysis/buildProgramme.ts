@@ -1,8 +1,10 @@
 import type { Alternative, Objective, PolicyRule, Site } from "../model/types.js";
+import type { ProgrammeYears } from "../model/programmeTypes.js";
 import type { Programme, SideConstraint } from "../solver/index.js";
+import { programmeYearRows } from "./programmeYearRows.js";
 
 /** The figures of an alternative that the programme uses (an uncertainty draw changes the last two). */
-export type AlternativeFigures = Pick<Alternative, "cost" | "ksiAvoided" | "benefitPV">;
+export type AlternativeFigures = Pick<Alternative, "cost" | "ksiAvoided" | "benefitPV" | "spendByYear">;
 
 /** A site as the programme sees it: its rules' scope, whether it must be funded, its alternatives' figures. */
 export interface SiteFigures {
@@ -18,13 +20,16 @@ export function objectiveValue(alternative: AlternativeFigures, objective: Objec
 
 /**
  * The integer program for a scenario: one group per site (required under a must-fund rule),
- * its alternatives as options, and one side constraint per spending, KSI-share or count rule.
+ * its alternatives as options, and one side constraint per spending, KSI-share or count rule;
+ * in a multi-year programme also one budget row per year (programmeYearRows), with `budget` the
+ * total of the years' budgets.
  */
 export function buildProgramme(
   sites: readonly SiteFigures[],
   rules: readonly PolicyRule[],
   objective: Objective,
   budget: number,
+  years?: ProgrammeYears,
 ): Programme {
   return {
     budget,
@@ -33,7 +38,10 @@ export function buildProgramme(
       required: entry.required,
       options: entry.alternatives.map((alternative) => ({ cost: alternative.cost, value: objectiveValue(alternative, objective) })),
     })),
-    constraints: rules.flatMap((rule, index) => sideConstraint(rule, index, sites)),
+    constraints: [
+      ...(years === undefined ? [] : programmeYearRows(sites, years, budget)),
+      ...rules.flatMap((rule, index) => sideConstraint(rule, index, sites, years?.firstYear ?? 0)),
+    ],
   };
 }
 
@@ -49,7 +57,7 @@ function scopeLabel(rule: { district?: string; tag?: string }): string {
   return "all sites";
 }
 
-function sideConstraint(rule: PolicyRule, index: number, sites: readonly SiteFigures[]): SideConstraint[] {
+function sideConstraint(rule: PolicyRule, index: number, sites: readonly SiteFigures[], firstYear: number): SideConstraint[] {
   const id = `rule-${index + 1}-${rule.kind}`;
   // coefficient(alternative, inScope): one row entry per option of every group.
   const row = (coefficient: (alternative: AlternativeFigures, inScope: boolean) => number) =>
@@ -75,12 +83,14 @@ function sideConstraint(rule: PolicyRule, index: number, sites: readonly SiteFig
           coefficients: row((alternative, inScope) => (inScope ? alternative.cost : 0) - share * alternative.cost),
         }];
       }
+      const year = rule.year;
+      const spend = (alternative: AlternativeFigures) => (year === undefined ? alternative.cost : alternative.spendByYear?.[year - firstYear] ?? 0);
       return [{
         id,
-        label: `spend in ${scopeLabel(rule)} ${word} ${rule.amount ?? 0}`,
+        label: `spend in ${scopeLabel(rule)}${year === undefined ? "" : ` in ${year}`} ${word} ${rule.amount ?? 0}`,
         sense,
         rhs: rule.amount ?? 0,
-        coefficients: row((alternative, inScope) => (inScope ? alternative.cost : 0)),
+        coefficients: row((alternative, inScope) => (inScope ? spend(alternative) : 0)),
       }];
     }
     case "ksi-share-floor":

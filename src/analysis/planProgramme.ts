@@ -29,7 +29,7 @@ export async function planProgramme(
   budget: number = prepared.scenario.budget,
   solveOptions: Partial<SolveOptions> = {},
 ): Promise<PlanResult> {
-  const programme = buildProgramme(prepared.sites, prepared.scenario.rules, prepared.objective, budget);
+  const programme = buildProgramme(prepared.sites, prepared.scenario.rules, prepared.objective, budget, prepared.scenario.programme);
   const solution = await solveProgramme(programme, solveOptions);
   return assemblePlan(prepared, budget, programme, solution);
 }

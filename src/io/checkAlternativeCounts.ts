@@ -26,7 +26,7 @@ export function checkAlternativeCounts(scenario: Scenario, raw: RawScenario, sou
     problems.push({
       code: "too-many-alternatives",
       ...at(candidatesPath(raw, index)),
-      message: `site '${site.id}' would have ${grouped(count)} alternatives (combinations of its ${site.candidates.length} candidates with up to ${limit} treatments each), more than the limit of ${grouped(MAX_ALTERNATIVES_PER_SITE)}`,
+      message: `site '${site.id}' would have ${grouped(count)} alternatives (combinations of its ${site.candidates.length} candidates with up to ${limit} treatments each${scenario.programme === undefined ? "" : ", in each of its build years"}), more than the limit of ${grouped(MAX_ALTERNATIVES_PER_SITE)}`,
       hint: "list fewer candidates at this site, lower maxTreatmentsPerSite, or give treatments that are never combined one exclusiveGroup",
     });
   });

@@ -5,7 +5,7 @@ import type { InputProblem } from "./InputError.js";
 import type { LoadedCatalogue } from "./loadCatalogue.js";
 import type { RawScenario } from "./loadScenario.js";
 import { candidatesPath } from "./loadScenarioSites.js";
-import { amountHint, parseAmount } from "./parseAmount.js";
+import { checkAmount, checkProgrammeBlock } from "./checkProgrammeBlock.js";
 import type { PathSegment, YamlSource } from "./readYamlFile.js";
 
 /**
@@ -46,7 +46,7 @@ export function checkScenarioReferences(
   if (raw.crashWindow.lastYear < raw.crashWindow.firstYear) {
     problem("window-reversed", ["crashWindow"], `the crash window ends (${raw.crashWindow.lastYear}) before it starts (${raw.crashWindow.firstYear})`, "swap firstYear and lastYear");
   }
-  checkAmount(raw.budget, ["budget"], problem);
+  checkProgrammeBlock(raw, treatments, problem);
   for (const severity of ["K", "A", "B", "C", "O"] as const) checkAmount(raw.economics.crashCosts[severity], ["economics", "crashCosts", severity], problem);
   const ksiCosting = raw.economics.ksiCosting;
   if (ksiCosting?.unitCost !== undefined) checkAmount(ksiCosting.unitCost, ["economics", "ksiCosting", "unitCost"], problem);
@@ -163,12 +163,4 @@ export function checkScenarioReferences(
   (rules.ksiShareFloors ?? []).forEach((rule, index) => checkSelector(["rules", "ksiShareFloors", index], rule));
   (rules.maxProjects ?? []).forEach((rule, index) => checkSelector(["rules", "maxProjects", index], rule));
   return problems;
-}
-
-function checkAmount(
-  value: number | string,
-  path: PathSegment[],
-  problem: (code: string, path: PathSegment[], message: string, hint?: string) => void,
-): void {
-  if (parseAmount(value) === undefined) problem("bad-amount", path, `'${String(value)}' is not an amount`, typeof value === "string" ? amountHint(value) : "write 4500000, 4.5M or 750k");
 }

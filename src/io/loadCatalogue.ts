@@ -1,4 +1,5 @@
 import { completeCrashMatrix, sumCrashMatrix } from "../model/crashMatrix.js";
+import type { CapitalPhase } from "../model/programmeTypes.js";
 import {
   CRASH_TYPES,
   SEVERITIES,
@@ -32,6 +33,7 @@ interface RawTreatment {
   upkeepPerYear?: number;
   serviceLifeYears: number;
   exclusiveGroup?: string;
+  phasing?: CapitalPhase[];
   effects: RawEffect[];
 }
 interface RawPerformanceFunction {
@@ -84,6 +86,7 @@ function toTreatment(raw: RawTreatment): Treatment {
     serviceLifeYears: raw.serviceLifeYears,
     ...(raw.exclusiveGroup !== undefined && { exclusiveGroup: raw.exclusiveGroup }),
     ...(raw.costSource !== undefined && { costSource: raw.costSource }),
+    ...(raw.phasing !== undefined && { phasing: raw.phasing }),
     // Specific effects first, so a catch-all ('all') effect only fills the cells they leave.
     effects: [...raw.effects].sort((a, b) => Number(a.crashTypes.includes("all")) - Number(b.crashTypes.includes("all"))).map(toEffect),
   };
@@ -152,6 +155,7 @@ function checkTreatments(raw: RawCatalogue, source: YamlSource): InputProblem[] 
           claimed.set(cell, effectIndex);
         }
     });
+    problems.push(...checkPhasing(treatment, index, source));
     if (treatment.cost.perKm !== undefined && !treatment.appliesTo.every((kind) => kind !== "intersection")) {
       problems.push({
         code: "cost-basis",
@@ -186,4 +190,19 @@ function checkPerformanceFunctions(raw: RawCatalogue, source: YamlSource): Input
     }
   });
   return problems;
+}
+
+/** A phasing spends all of the capital, once per year. */
+function checkPhasing(treatment: RawTreatment, index: number, source: YamlSource): InputProblem[] {
+  if (treatment.phasing === undefined) return [];
+  const at = { file: source.file, ...source.positionOf(["treatments", index, "phasing"]), path: `treatments[${index}].phasing` };
+  const years = treatment.phasing.map((phase) => phase.yearsBeforeBuild);
+  if (new Set(years).size !== years.length) {
+    return [{ code: "phasing", ...at, message: `the phasing of '${treatment.id}' names one year twice`, hint: "give each yearsBeforeBuild once, with the share of capital spent that year" }];
+  }
+  const total = treatment.phasing.reduce((sum, phase) => sum + phase.share, 0);
+  if (Math.abs(total - 1) > 1e-9) {
+    return [{ code: "phasing", ...at, message: `the phasing shares of '${treatment.id}' add up to ${total}, not 1`, hint: "make the shares add up to 1 (e.g. 0.2 the year before and 0.8 in the build year)" }];
+  }
+  return [];
 }

@@ -15,6 +15,7 @@ import type {
   SiteKind,
   UncertaintySettings,
 } from "../model/types.js";
+import type { CarryOverRule, ProgrammeYears } from "../model/programmeTypes.js";
 import { calibrateCatalogue } from "./calibrateCatalogue.js";
 import { checkAlternativeCounts } from "./checkAlternativeCounts.js";
 import { checkScenarioReferences } from "./checkScenarioReferences.js";
@@ -44,6 +45,8 @@ interface RawSite {
   /** Treatment ids to consider; empty when the site has none (it is screened, never funded). */
   candidates: string[];
   costOverrides?: Record<string, Amount>;
+  earliestYear?: number;
+  latestYear?: number;
 }
 interface Selector {
   district?: string;
@@ -54,7 +57,16 @@ export interface RawScenario {
   name: string;
   catalogues: string[];
   currency: string;
-  budget: Amount;
+  /** Absent in a programme, which gives its budgets by year. */
+  budget?: Amount;
+  programme?: {
+    firstYear: number;
+    years: number;
+    budgets: Amount | Amount[];
+    carryOver?: CarryOverRule;
+    costEscalationRate?: number;
+    committed?: { site: string; treatments: string[]; year: number }[];
+  };
   crashWindow: { firstYear: number; lastYear: number };
   economics: {
     discountRate: number;
@@ -74,8 +86,8 @@ export interface RawScenario {
   rules?: {
     mustFund?: { site: string; treatments?: string[] }[];
     neverFund?: { site: string; treatments?: string[] }[];
-    spendCaps?: (Selector & { amount?: Amount; share?: number })[];
-    spendFloors?: (Selector & { amount?: Amount; share?: number })[];
+    spendCaps?: (Selector & { amount?: Amount; share?: number; year?: number })[];
+    spendFloors?: (Selector & { amount?: Amount; share?: number; year?: number })[];
     ksiShareFloors?: (Selector & { share: number })[];
     maxProjects?: (Selector & { count: number })[];
   };
@@ -154,10 +166,13 @@ function toScenario(raw: RawScenario, uncalibrated: Catalogue): Scenario {
       },
     }),
   };
+  const programme = raw.programme === undefined ? undefined : toProgramme(raw.programme);
   return {
     name: raw.name,
     currency: raw.currency,
-    budget: amount(raw.budget),
+    // A programme's budget is the sum of its years' (each year's row keeps its own share of it).
+    budget: programme === undefined ? amount(raw.budget!) : programme.budgets.reduce((total, value) => total + value, 0),
+    ...(programme !== undefined && { programme }),
     crashWindow: raw.crashWindow,
     economics: {
       discountRate: raw.economics.discountRate,
@@ -194,6 +209,20 @@ function toSite(raw: RawSite): Site {
     crashes: completeCrashMatrix(raw.crashes),
     candidates: raw.candidates,
     costOverrides: Object.fromEntries(Object.entries(raw.costOverrides ?? {}).map(([id, value]) => [id, amount(value)])),
+    ...(raw.earliestYear !== undefined && { earliestYear: raw.earliestYear }),
+    ...(raw.latestYear !== undefined && { latestYear: raw.latestYear }),
+  };
+}
+
+function toProgramme(raw: NonNullable<RawScenario["programme"]>): ProgrammeYears {
+  const budgets = Array.isArray(raw.budgets) ? raw.budgets.map(amount) : new Array<number>(raw.years).fill(amount(raw.budgets));
+  return {
+    firstYear: raw.firstYear,
+    years: raw.years,
+    budgets,
+    carryOver: raw.carryOver ?? "none",
+    costEscalationRate: raw.costEscalationRate ?? 0,
+    committed: raw.committed ?? [],
   };
 }
 
@@ -202,9 +231,10 @@ function selector(raw: Selector): Selector {
 }
 
 function toRules(raw: NonNullable<RawScenario["rules"]>): PolicyRule[] {
-  const spend = (kind: "spend-cap" | "spend-floor") => (rule: Selector & { amount?: Amount; share?: number }): PolicyRule => ({
+  const spend = (kind: "spend-cap" | "spend-floor") => (rule: Selector & { amount?: Amount; share?: number; year?: number }): PolicyRule => ({
     kind,
     ...selector(rule),
+    ...(rule.year !== undefined && { year: rule.year }),
     ...(rule.amount !== undefined && { amount: amount(rule.amount) }),
     ...(rule.share !== undefined && { share: rule.share }),
   });

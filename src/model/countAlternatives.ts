@@ -1,3 +1,4 @@
+import { buildYears } from "./buildYears.js";
 import { countTreatmentSets } from "./countTreatmentSets.js";
 import { siteTreatmentSetRules } from "./siteTreatmentSetRules.js";
 import type { Scenario } from "./types.js";
@@ -17,7 +18,7 @@ export const MAX_ALTERNATIVES_PER_SITE = 5_000;
 export const MAX_ALTERNATIVES_TOTAL = 1_000_000;
 
 /**
- * How many alternatives each site of a scenario has (in site order), counted arithmetically
+ * How many alternatives (in a programme: times its build years) each site of a scenario has (in site order), counted arithmetically
  * before any is built (countTreatmentSets), under the same candidates, per-site limit,
  * exclusive groups and must-fund / never-fund rules as buildAlternatives.
  */
@@ -25,6 +26,8 @@ export function countAlternatives(scenario: Scenario): number[] {
   const treatments = new Map(scenario.catalogue.treatments.map((t) => [t.id, t]));
   return scenario.sites.map((site) => {
     const rules = siteTreatmentSetRules(scenario, site, treatments);
-    return rules.excludedBy !== undefined ? 0 : countTreatmentSets(rules.candidates, rules.limits);
+    if (rules.excludedBy !== undefined) return 0;
+    const years = scenario.programme === undefined ? 1 : buildYears(site, scenario.programme).length;
+    return countTreatmentSets(rules.candidates, rules.limits) * years;
   });
 }

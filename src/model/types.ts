@@ -2,6 +2,7 @@
  * The core vocabulary of averta: plain, read-only data shared by every stage.
  * Money is in the scenario's currency units; years are whole years; rates are fractions.
  */
+import type { CapitalPhase, ProgrammeYears } from "./programmeTypes.js";
 
 /** KABCO injury severity of a crash (its most severe injury). K+A are the KSI crashes. */
 export type Severity = "K" | "A" | "B" | "C" | "O";
@@ -70,6 +71,8 @@ export interface Treatment {
   readonly exclusiveGroup?: string;
   readonly effects: readonly Effect[];
   readonly costSource?: string;
+  /** In a programme: how the capital is spread over the build year and the years before it (absent: all in the build year). */
+  readonly phasing?: readonly CapitalPhase[];
 }
 
 /** A safety performance function: predicted crashes per year = exp(a) × AADT^b × lengthKm^c (segments). */
@@ -120,6 +123,9 @@ export interface Site {
   readonly candidates: readonly string[];
   /** Capital cost overrides by treatment id. */
   readonly costOverrides: Readonly<Record<string, number>>;
+  /** In a programme: the first and last years the site may be built in. */
+  readonly earliestYear?: number;
+  readonly latestYear?: number;
 }
 
 /**
@@ -206,6 +212,8 @@ export type PolicyRule =
       readonly district?: string;
       readonly tag?: string;
       readonly amount?: number;
+      /** In a programme: the rule covers this year's spend only. */
+      readonly year?: number;
       readonly share?: number;
     }
   | { readonly kind: "ksi-share-floor"; readonly district?: string; readonly tag?: string; readonly share: number }
@@ -237,6 +245,8 @@ export interface Scenario {
   /** Local calibration of SPFs the scenario asked for (the catalogue's SPFs carry the factors). */
   readonly calibrations?: readonly SpfCalibration[];
   readonly uncertainty?: UncertaintySettings;
+  /** A multi-year programme; absent: a one-year list under `budget`. */
+  readonly programme?: ProgrammeYears;
 }
 
 /** One allowed combination of treatments at one site, with its effects and economics. */
@@ -261,4 +271,7 @@ export interface Alternative {
   readonly effectiveYears: number;
   /** Crash cells with expected crashes on which two or more of its treatments act (their combined CMF is a modelling assumption). */
   readonly sharedCells: number;
+  /** In a programme: the build year, and the capital spent in each programme year (first year first). */
+  readonly buildYear?: number;
+  readonly spendByYear?: readonly number[];
 }

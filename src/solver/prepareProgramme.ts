@@ -3,6 +3,7 @@ import { buildGroupHull } from "./buildGroupHull.js";
 import { canonicalGroupOrder } from "./canonicalGroupOrder.js";
 import { diagnoseInfeasibility } from "./diagnoseInfeasibility.js";
 import { loadHighs } from "./loadHighs.js";
+import { pruneDominatedOptions } from "./pruneDominatedOptions.js";
 import { reorderProgramme } from "./reorderProgramme.js";
 import { solveSingleBudget } from "./solveSingleBudget.js";
 import { solveWithHighs } from "./solveWithHighs.js";
@@ -84,11 +85,14 @@ export function prepareProgramme(programme: Programme, options: Partial<SolveOpt
     try {
       const highs = await loadHighs();
       const ordered = reorderProgramme(target, canonical);
+      // The exact engine drops options another dominates in every row first; HiGHS, the reference, sees the model whole.
+      const pruned = engine === "exact" ? pruneDominatedOptions(ordered) : undefined;
       const result =
-        engine === "exact" ? solveWithSideConstraints(highs, ordered, settings) : solveWithHighs(highs, ordered, settings);
+        pruned !== undefined ? solveWithSideConstraints(highs, pruned.programme, settings) : solveWithHighs(highs, ordered, settings);
       const choice: (number | null)[] = new Array<number | null>(target.groups.length).fill(null);
       canonical.forEach((g, k) => {
-        choice[g] = result.choice[k] ?? null;
+        const picked = result.choice[k] ?? null;
+        choice[g] = picked === null || pruned === undefined ? picked : pruned.kept[k]![picked]!;
       });
       return { ...result, choice };
     } catch (error) {

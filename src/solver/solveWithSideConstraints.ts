@@ -23,6 +23,14 @@ export const MAX_REJECTED_ANSWERS = 20;
 const MIN_TIED_GROUPS = 4;
 
 /**
+ * Most rows (the budget among them) binding at the LP optimum for that subset-sum treatment: the
+ * halves search sorts by one binding row, which pays off when one other row binds beside the
+ * budget (a K+A share floor). With more, as under a programme's year rows, it does not: the
+ * five-year demo took 3–9 s without it and ran into the 60 s limit with it.
+ */
+const MAX_BINDING_ROWS_FOR_HALVES = 2;
+
+/**
  * Branch-and-bound nodes of the short HiGHS runs on a restriction with ties, in turn: a very
  * short one for a first programme to search around, then a longer one (about a second on most
  * restrictions, ten on some), before HiGHS runs to the time limit.
@@ -106,7 +114,8 @@ export function solveWithSideConstraints(
   // Groups where two or more choices tie exactly at the LP multipliers: the subset-sum signature.
   const tie = 1e-9 * scale;
   const tiedGroups = groups.filter((group, g) => reduced[g]!.filter((r) => best[g]! - r <= tie).length + (!group.required && best[g]! <= tie ? 1 : 0) >= 2).length;
-  const degenerate = tiedGroups >= MIN_TIED_GROUPS;
+  const bindingRows = rowMultipliers.filter((mu) => mu > 0).length;
+  const degenerate = tiedGroups >= MIN_TIED_GROUPS && bindingRows <= MAX_BINDING_ROWS_FOR_HALVES;
 
   let threshold = FIRST_THRESHOLD * scale;
   let incumbent: { choice: (number | null)[]; objective: number } | undefined;

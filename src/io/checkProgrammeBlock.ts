@@ -1,0 +1,88 @@
+import type { Treatment } from "../model/types.js";
+import { closestName } from "./closestName.js";
+import type { RawScenario } from "./loadScenario.js";
+import { parseAmount, amountHint } from "./parseAmount.js";
+import type { PathSegment } from "./readYamlFile.js";
+
+type Problem = (code: string, path: PathSegment[], message: string, hint?: string) => void;
+
+/** A money amount parseAmount accepts. */
+export function checkAmount(value: number | string, path: PathSegment[], problem: Problem): void {
+  if (parseAmount(value) === undefined) problem("bad-amount", path, `'${String(value)}' is not an amount`, typeof value === "string" ? amountHint(value) : "write 4500000, 4.5M or 750k");
+}
+
+/**
+ * The budget and the programme block: one of `budget` or `programme` (whose budgets, one per year
+ * or one for all, must parse), committed projects that name real sites and treatments in a
+ * programme year, site build windows inside the programme, per-year rules inside it, and a
+ * horizon long enough for its last year's projects to act.
+ */
+export function checkProgrammeBlock(raw: RawScenario, treatments: ReadonlyMap<string, Treatment>, problem: Problem): void {
+  const programme = raw.programme;
+  if (programme === undefined) {
+    if (raw.budget === undefined) problem("schema", [], "missing required field 'budget'", "add 'budget:' here, or a programme: block with the budget of each year");
+    else checkAmount(raw.budget, ["budget"], problem);
+    raw.sites.forEach((site, index) => {
+      for (const field of ["earliestYear", "latestYear"] as const) {
+        if (site[field] !== undefined) problem("needs-programme", ["sites", index, field], `${field} only applies in a multi-year programme`, "add a programme: block, or remove it");
+      }
+    });
+    for (const listName of ["spendCaps", "spendFloors"] as const) {
+      (raw.rules?.[listName] ?? []).forEach((rule, index) => {
+        if (rule.year !== undefined) problem("needs-programme", ["rules", listName, index, "year"], "a rule for one year only applies in a multi-year programme", "add a programme: block, or remove year");
+      });
+    }
+    return;
+  }
+  if (raw.budget !== undefined) problem("rule-conflict", ["budget"], "a programme gives its budgets in programme.budgets", "remove budget:, or the programme: block");
+  const { firstYear, years } = programme;
+  const lastYear = firstYear + years - 1;
+  const inProgramme = (year: number) => year >= firstYear && year <= lastYear;
+  const span = `${firstYear}–${lastYear}`;
+  if (Array.isArray(programme.budgets)) {
+    if (programme.budgets.length !== years) {
+      problem("budget-years", ["programme", "budgets"], `${programme.budgets.length} budget(s) for a ${years}-year programme`, `give one amount per year (${years}), or one amount for every year`);
+    }
+    programme.budgets.forEach((amount, index) => checkAmount(amount, ["programme", "budgets", index], problem));
+  } else checkAmount(programme.budgets, ["programme", "budgets"], problem);
+  if (raw.economics.horizonYears < years) {
+    problem("horizon-short", ["economics", "horizonYears"], `the horizon (${raw.economics.horizonYears} years) is shorter than the ${years}-year programme, so its last years' projects would have no year of benefit`, `make horizonYears at least ${years}`);
+  }
+
+  const siteIds = new Map(raw.sites.map((site, index) => [site.id, index]));
+  const neverFund = new Set((raw.rules?.neverFund ?? []).filter((rule) => (rule.treatments ?? []).length === 0).map((rule) => rule.site));
+  const committedSites = new Set<string>();
+  (programme.committed ?? []).forEach((project, index) => {
+    const path: PathSegment[] = ["programme", "committed", index];
+    if (!siteIds.has(project.site)) {
+      const guess = closestName(project.site, siteIds.keys());
+      problem("unknown-id", [...path, "site"], `unknown site '${project.site}'`, guess ? `did you mean '${guess}'?` : "use a site id from sites");
+    } else if (committedSites.has(project.site)) {
+      problem("duplicate-id", [...path, "site"], `site '${project.site}' is committed twice`, "a site is treated at most once in a programme: keep one entry");
+    } else if (neverFund.has(project.site)) {
+      problem("rule-conflict", [...path, "site"], `site '${project.site}' is both committed and never-fund`, "remove one of the two");
+    }
+    committedSites.add(project.site);
+    project.treatments.forEach((id, treatmentIndex) => {
+      if (!treatments.has(id)) {
+        const guess = closestName(id, treatments.keys());
+        problem("unknown-id", [...path, "treatments", treatmentIndex], `unknown treatment '${id}'`, guess ? `did you mean '${guess}'?` : "add it to a catalogue, or check the catalogue list");
+      }
+    });
+    if (!inProgramme(project.year)) {
+      problem("year-outside", [...path, "year"], `${project.year} is not a year of the programme (${span})`, project.year < firstYear ? "a project built before the programme is no longer part of it: drop it (its crashes are in the next crash window)" : `use a year from ${span}`);
+    }
+  });
+  raw.sites.forEach((site, index) => {
+    const earliest = site.earliestYear ?? firstYear;
+    const latest = site.latestYear ?? lastYear;
+    if (earliest > latest) problem("year-window", ["sites", index], `site '${site.id}' may be built from ${earliest} but only until ${latest}`, "make earliestYear no later than latestYear");
+    else if (earliest > lastYear || latest < firstYear) problem("year-outside", ["sites", index], `site '${site.id}' may be built only in ${earliest}–${latest}, outside the programme (${span})`, "widen its earliestYear/latestYear, or remove them");
+  });
+  for (const listName of ["spendCaps", "spendFloors"] as const) {
+    (raw.rules?.[listName] ?? []).forEach((rule, index) => {
+      if (rule.year !== undefined && !inProgramme(rule.year)) problem("year-outside", ["rules", listName, index, "year"], `${rule.year} is not a year of the programme (${span})`, `use a year from ${span}`);
+      if (rule.year !== undefined && rule.share !== undefined) problem("rule-amount", ["rules", listName, index], "a rule for one year takes an amount, not a share", "write amount: 1.2M");
+    });
+  }
+}

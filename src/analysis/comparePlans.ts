@@ -10,6 +10,8 @@ export interface ComparedProject {
   readonly treatments: readonly string[];
   readonly cost: number;
   readonly ksiAvoided: number;
+  /** In a multi-year programme: the build year. */
+  readonly buildYear?: number;
 }
 
 /** A site funded in both lists, with a different treatment set. */
@@ -33,6 +35,8 @@ export interface PlanComparison {
   /** Funded in A, not in B. */
   readonly leaving: readonly ComparedProject[];
   readonly changed: readonly ChangedTreatment[];
+  /** In programmes: sites funded in both with the same treatments in a different build year. */
+  readonly moved: readonly ChangedTreatment[];
   /** Each side's solver status and, when it has no list, why (e.g. must-fund sites over the budget). */
   readonly sideA: ComparedSide;
   readonly sideB: ComparedSide;
@@ -43,7 +47,7 @@ export interface PlanComparison {
 
 /**
  * Compares two funded lists site by site: which sites enter, which leave, which change treatment
- * set (order-insensitive), and the change in spend, KSI avoided, benefit PV and B/C (B − A).
+ * set (order-insensitive), which (in programmes) keep it but move year, and the change in spend, KSI avoided, benefit PV and B/C (B − A).
  * Sites are matched by id, so two scenarios over the same sites compare naturally.
  */
 export function comparePlans(a: PlanResult, b: PlanResult): PlanComparison {
@@ -52,10 +56,13 @@ export function comparePlans(a: PlanResult, b: PlanResult): PlanComparison {
   const entering = b.funded.filter((project) => !inA.has(project.entry.site.id)).map(compared);
   const leaving = a.funded.filter((project) => !inB.has(project.entry.site.id)).map(compared);
   const changed: ChangedTreatment[] = [];
+  const moved: ChangedTreatment[] = [];
   for (const after of b.funded) {
     const before = inA.get(after.entry.site.id);
-    if (before === undefined || sameTreatments(before.alternative, after.alternative)) continue;
-    changed.push({ site: after.entry.site.id, name: after.entry.site.name, before: compared(before), after: compared(after) });
+    if (before === undefined) continue;
+    const change = { site: after.entry.site.id, name: after.entry.site.name, before: compared(before), after: compared(after) };
+    if (!sameTreatments(before.alternative, after.alternative)) changed.push(change);
+    else if (before.alternative.buildYear !== after.alternative.buildYear) moved.push(change);
   }
   const totalsA = a.totals;
   const totalsB = b.totals;
@@ -63,6 +70,7 @@ export function comparePlans(a: PlanResult, b: PlanResult): PlanComparison {
     entering,
     leaving,
     changed,
+    moved,
     sideA: side(a),
     sideB: side(b),
     totalsA,
@@ -88,6 +96,7 @@ function compared(project: FundedProject): ComparedProject {
     treatments: project.alternative.treatments,
     cost: project.alternative.cost,
     ksiAvoided: project.alternative.ksiAvoided,
+    ...(project.alternative.buildYear !== undefined && { buildYear: project.alternative.buildYear }),
   };
 }
 

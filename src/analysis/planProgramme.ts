@@ -3,7 +3,9 @@ import type { Alternative } from "../model/types.js";
 import { solveProgramme, type Programme, type Solution, type SolveOptions } from "../solver/index.js";
 import { buildProgramme } from "./buildProgramme.js";
 import type { PreparedPlan } from "./preparePlan.js";
+import { justifyTiming, type ProjectTiming } from "./justifyTiming.js";
 import { summariseSelection, type ProgrammeTotals } from "./summariseSelection.js";
+import { summariseYears, type ProgrammeYearSummary } from "./summariseYears.js";
 
 /** One funded project: a site and the alternative chosen there. */
 export interface FundedProject {
@@ -21,6 +23,9 @@ export interface PlanResult {
   readonly solution: Solution;
   readonly funded: readonly FundedProject[];
   readonly totals: ProgrammeTotals;
+  /** In a multi-year programme: the programme year by year, and why each project is in its year. */
+  readonly years?: readonly ProgrammeYearSummary[];
+  readonly timing?: readonly ProjectTiming[];
 }
 
 /** Solves the prepared scenario at `budget` and gathers the funded projects and totals. */
@@ -42,5 +47,10 @@ export function assemblePlan(prepared: PreparedPlan, budget: number, programme: 
     const entry = prepared.sites[group]!;
     funded.push({ entry, alternative: entry.alternatives[index]!, index });
   });
-  return { prepared, budget, programme, solution, funded, totals: summariseSelection(funded.map((project) => project.alternative)) };
+  const totals = summariseSelection(funded.map((project) => project.alternative));
+  const years = prepared.scenario.programme;
+  if (years === undefined) return { prepared, budget, programme, solution, funded, totals };
+  const byYear = summariseYears(funded, years, budget);
+  const committed = new Set(years.committed.map((project) => project.site));
+  return { prepared, budget, programme, solution, funded, totals, years: byYear, timing: justifyTiming(funded, years, byYear, committed) };
 }

@@ -24,11 +24,12 @@ export interface UpgradeCheck {
  */
 export function upgradeChecks(result: PlanResult): UpgradeCheck[] {
   const checks: UpgradeCheck[] = [];
-  for (const { entry, index } of result.funded) {
-    const alternatives = entry.alternatives;
+  for (const { entry, alternative: chosen } of result.funded) {
+    // In a programme the ladder is the site's alternatives in the chosen build year.
+    const alternatives = entry.alternatives.filter((alternative) => alternative.buildYear === chosen.buildYear);
+    const index = alternatives.indexOf(chosen);
     if (alternatives.length < 2) continue;
     const analysis = incrementalBenefitCost(alternatives);
-    const chosen = alternatives[index]!;
     // The best-benefit alternative among the strictly cheaper ones: the ladder rung just below.
     let below: number | null = null;
     alternatives.forEach((alternative, other) => {

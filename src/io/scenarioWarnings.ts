@@ -18,6 +18,17 @@ export function scenarioWarnings(
 ): InputProblem[] {
   const warnings: InputProblem[] = [];
   const years = windowYears(scenario);
+  if (scenario.programme !== undefined && scenario.economics.renewal === "none") {
+    // Without renewal a later build acts as many years, only later: waiting costs no K+A unless its life runs past the horizon.
+    warnings.push({
+      code: "programme-without-renewal",
+      file: source.file,
+      ...source.positionOf(["programme"], true),
+      path: "programme",
+      message: "in a programme with renewal none, a treatment whose service life ends inside the horizon avoids as many K+A crashes built late as built early, so the optimiser may put the best sites last",
+      hint: "set economics.renewal: renew (or residual-value) so that the years a project waits are lost",
+    });
+  }
   if (years < MIN_RECOMMENDED_WINDOW_YEARS) {
     // The window is written in the scenario, or else in its sites file.
     const windowSource = (source.data as { crashWindow?: unknown }).crashWindow === undefined ? sitesSource : source;

@@ -22,6 +22,7 @@ export function compareJson(comparison: PlanComparison, labels: CompareLabels): 
     entering: comparison.entering,
     leaving: comparison.leaving,
     changedTreatment: comparison.changed,
+    ...(comparison.moved.length > 0 && { movedYear: comparison.moved }),
     definitions: { ksiAvoided: KSI_AVOIDED_DEFINITION, spend: `capital cost of the list, in ${labels.currency}`, change: "B − A" },
     cautions: CAUTIONS,
   };

@@ -61,6 +61,16 @@ export function compareTable(comparison: PlanComparison, labels: CompareLabels):
         ksi: `${formatFixed(change.before.ksiAvoided, 2)} → ${formatFixed(change.after.ksiAvoided, 2)}`,
       })),
     ),
+    ...(comparison.moved.length === 0 ? [] : section(
+      "Same treatments, another build year (A → B)",
+      comparison.moved.map((change) => ({
+        site: change.site,
+        name: change.name,
+        treatments: `${change.after.treatments.join(" + ")}: ${change.before.buildYear} → ${change.after.buildYear}`,
+        cost: `${formatMoney(change.before.cost)} → ${formatMoney(change.after.cost)}`,
+        ksi: `${formatFixed(change.before.ksiAvoided, 2)} → ${formatFixed(change.after.ksiAvoided, 2)}`,
+      })),
+    )),
     "Cautions:",
     ...CAUTIONS.map((caution) => `- ${caution}`),
   ];

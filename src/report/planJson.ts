@@ -6,6 +6,7 @@ import { describeAssumptions } from "./describeAssumptions.js";
 import { jsonNumber } from "./formatNumber.js";
 import { COST_PER_KSI_DEFINITION, KSI_AVOIDED_DEFINITION, KSI_AVOIDED_PER_YEAR_DEFINITION } from "./ksiAvoidedLabel.js";
 import { marginalValueDefinition } from "./marginalValueWords.js";
+import { programmeJson, projectYearJson } from "./programmeJson.js";
 import { totalsJson } from "./totalsJson.js";
 
 /**
@@ -25,7 +26,8 @@ export function planJson(result: PlanResult): object {
     status: solution.status,
     ...(solution.diagnosis !== undefined && { diagnosis: solution.diagnosis }),
     totals: totalsJson(totals),
-    selected: result.funded.map(({ entry, alternative }) => ({
+    ...programmeJson(result),
+    selected: result.funded.map(({ entry, alternative }, index) => ({
       site: entry.site.id,
       name: entry.site.name,
       kind: entry.site.kind,
@@ -41,6 +43,7 @@ export function planJson(result: PlanResult): object {
       required: entry.required,
       baseline: methodBySite.get(entry.site.id),
       sharedCrashCells: alternative.sharedCells,
+      ...projectYearJson(result, index),
     })),
     sitesWithoutCandidates: sitesWithoutCandidates(prepared.scenario.sites),
     bound: solution.bound,

@@ -7,6 +7,7 @@ import { formatFixed, formatMoney } from "./formatNumber.js";
 import { hasList } from "./hasList.js";
 import { KSI_AVOIDED_LABEL } from "./ksiAvoidedLabel.js";
 import { noCandidatesText } from "./noCandidatesText.js";
+import { programmeTimingTable, programmeYearsTable } from "./programmeYearsTable.js";
 import { textTable } from "./textTable.js";
 
 /** Projects the table lists unless asked for all: beyond this a terminal list stops being read. */
@@ -22,6 +23,8 @@ export function planTable(result: PlanResult, sections: readonly string[] = [], 
   const currency = prepared.scenario.currency;
   const methodBySite = new Map(prepared.baselines.map((baseline) => [baseline.site, baseline.method === "empirical-bayes" ? "EB" : "observed"]));
   const noCandidates = noCandidatesText(sitesWithoutCandidates(prepared.scenario.sites));
+  const years = prepared.scenario.programme !== undefined;
+  const programmeSections = [programmeYearsTable(result), programmeTimingTable(result, options)].filter((section): section is string => section !== undefined);
   const cut = options.all !== true && result.funded.length > PLAN_TABLE_ROWS;
   const value = prepared.objective === "ksi" ? (project: (typeof result.funded)[number]) => project.alternative.ksiAvoided : (project: (typeof result.funded)[number]) => project.alternative.benefitPV;
   const listed = cut ? [...result.funded].sort((x, y) => value(y) - value(x)).slice(0, PLAN_TABLE_ROWS) : result.funded;
@@ -29,7 +32,7 @@ export function planTable(result: PlanResult, sections: readonly string[] = [], 
   // Figures are short, so their long headings wrap rather than widen the table.
   const narrow = (heading: string) => ({ heading, align: "right" as const, maxWidth: 14 });
   const table = textTable(
-    [{ heading: "Site" }, { heading: "Name", maxWidth: 24 }, { heading: "District" }, { heading: "Baseline" }, { heading: "Treatments", maxWidth: 32 }, narrow(`Cost (${currency})`), narrow(KSI_AVOIDED_LABEL), right("B/C"), narrow(`NPV (${currency})`), narrow(`Cost per K+A crash avoided (${currency})`)],
+    [{ heading: "Site" }, { heading: "Name", maxWidth: 24 }, { heading: "District" }, { heading: "Baseline" }, { heading: "Treatments", maxWidth: 32 }, ...(years ? [{ heading: "Year" }] : []), narrow(`Cost (${currency})`), narrow(KSI_AVOIDED_LABEL), right("B/C"), narrow(`NPV (${currency})`), narrow(`Cost per K+A crash avoided (${currency})`)],
     [
       ...listed.map(({ entry, alternative }) => [
         entry.site.id + (entry.required ? " *" : ""),
@@ -37,13 +40,14 @@ export function planTable(result: PlanResult, sections: readonly string[] = [], 
         entry.site.district,
         methodBySite.get(entry.site.id) ?? "",
         alternative.treatments.join(" + "),
+        ...(years ? [String(alternative.buildYear)] : []),
         formatMoney(alternative.cost),
         formatFixed(alternative.ksiAvoided, 2),
         formatFixed(alternative.bcRatio, 2),
         formatMoney(alternative.npv),
         formatMoney(alternative.costPerKsi),
       ]),
-      { lead: `Total: ${totals.projects} project(s)`, span: 5, cells: [formatMoney(totals.cost), formatFixed(totals.ksiAvoided, 2), formatFixed(totals.bcRatio, 2), formatMoney(totals.npv), formatMoney(totals.costPerKsi)] },
+      { lead: `Total: ${totals.projects} project(s)`, span: years ? 6 : 5, cells: [formatMoney(totals.cost), formatFixed(totals.ksiAvoided, 2), formatFixed(totals.bcRatio, 2), formatMoney(totals.npv), formatMoney(totals.costPerKsi)] },
     ],
   );
   const shownNote = `Showing the ${PLAN_TABLE_ROWS} of ${result.funded.length} funded projects with the most ${prepared.objective === "ksi" ? "K+A crashes avoided" : "benefit PV"}, largest first; the total covers all of them. --all lists every project; --format csv or json always carries them all.`;
@@ -58,7 +62,7 @@ export function planTable(result: PlanResult, sections: readonly string[] = [], 
     "",
     hasList(result) ? table : "",
     ...(cut ? [shownNote] : []),
-    result.funded.some((project) => project.entry.required) ? "* required by a must-fund rule" : "",
+    result.funded.some((project) => project.entry.required) ? `* required by a must-fund rule${years ? " or committed by an earlier programme" : ""}` : "",
     hasList(result)
       ? `Optimality: upper bound ${formatFixed(solution.bound, 3)}, gap ${solution.gap.toExponential(1)} (engine: ${solution.engine}).`
       : `No list at this budget (status ${solution.status}, engine: ${solution.engine}).`,
@@ -67,7 +71,7 @@ export function planTable(result: PlanResult, sections: readonly string[] = [], 
     ...planMethodNotes(result).notes.map((note) => `- ${note}`),
     ...methodLines(describeAssumptions(prepared.scenario)).map((line) => `- ${line}`),
     "",
-    ...sections.flatMap((section) => [section, ""]),
+    ...[...programmeSections, ...sections].flatMap((section) => [section, ""]),
     "Cautions:",
     ...CAUTIONS.map((caution) => `- ${caution}`),
   ];

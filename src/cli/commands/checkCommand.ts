@@ -8,6 +8,7 @@ import { sitesWithoutCandidates } from "../../model/sitesWithoutCandidates.js";
 import { KSI_SEVERITIES } from "../../model/types.js";
 import { describeAssumptions } from "../../report/describeAssumptions.js";
 import { formatFixed, formatMoney } from "../../report/formatNumber.js";
+import type { Scenario } from "../../model/types.js";
 import type { CliIo } from "../CliIo.js";
 
 /** `averta check <scenario>`: validate the files and summarise what the optimiser will see. */
@@ -31,10 +32,11 @@ export function registerCheckCommand(program: Command, io: CliIo): void {
         ...(loaded.sitesSource !== loaded.source ? [`  sites file     ${loaded.sitesSource.file}`] : []),
         `  sites          ${scenario.sites.length} (${byKind("intersection")} intersections, ${byKind("segment")} segments, ${byKind("corridor")} corridors) in ${new Set(scenario.sites.map((s) => s.district)).size} district(s)`,
         `  treatments     ${scenario.catalogue.treatments.length} in ${loaded.catalogues.length} catalogue(s)`,
-        `  alternatives   ${alternatives} (up to ${scenario.maxTreatmentsPerSite} treatments per site)`,
+        `  alternatives   ${alternatives} (up to ${scenario.maxTreatmentsPerSite} treatments per site${scenario.programme === undefined ? "" : ", each in every build year it can have"})`,
         ...(withoutCandidates.length > 0 ? [`  no candidates  ${withoutCandidates.length} site(s): screened and counted, but they cannot be funded until treatments are listed`] : []),
         `  crashes        ${crashes} in ${scenario.crashWindow.firstYear}-${scenario.crashWindow.lastYear}, of which KSI crashes (K+A) ${ksi} (${formatFixed(ksi / windowYears(scenario), 1)} a year)`,
         `  budget         ${formatMoney(scenario.budget)} ${scenario.currency}`,
+        ...programmeLines(scenario),
         `  baselines      ${scenario.baseline}: Empirical Bayes at ${prepared.baselines.filter((b) => b.method === "empirical-bayes").length} site(s), observed counts at ${prepared.baselines.filter((b) => b.method === "observed").length}`,
         `  K+A costing    ${describeAssumptions(scenario).ksiCosting}`,
         `  rules          ${scenario.rules.length}`,
@@ -61,4 +63,18 @@ function summariseProblems(label: string, warnings: readonly { code: string; tex
     if (texts.length > listed) lines.push(`${label}: … and ${texts.length - listed} more like these`);
   }
   return lines.join("\n") + "\n";
+}
+
+/** What `check` says of a multi-year programme: years, budgets, carry-over, escalation, phasing and commitments. */
+function programmeLines(scenario: Scenario): string[] {
+  const programme = scenario.programme;
+  if (programme === undefined) return [];
+  const phased = scenario.catalogue.treatments.filter((t) => t.phasing !== undefined).map((t) => t.id);
+  const windows = scenario.sites.filter((site) => site.earliestYear !== undefined || site.latestYear !== undefined).length;
+  return [
+    `  programme      ${programme.firstYear}-${programme.firstYear + programme.years - 1}: budgets ${programme.budgets.map((b) => formatMoney(b)).join(", ")}; carry-over ${programme.carryOver}; cost escalation ${formatFixed(programme.costEscalationRate * 100, 1)}% a year`,
+    `  committed      ${programme.committed.length === 0 ? "none" : programme.committed.map((p) => `${p.site} (${p.treatments.join(" + ")}, ${p.year})`).join("; ")}`,
+    `  phasing        ${phased.length === 0 ? "none: all capital in the build year" : `${phased.length} treatment(s) spend capital before the build year (${phased.join(", ")})`}`,
+    ...(windows > 0 ? [`  build windows  ${windows} site(s) have an earliest or latest build year`] : []),
+  ];
 }

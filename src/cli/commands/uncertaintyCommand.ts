@@ -56,7 +56,11 @@ export function registerUncertaintyCommand(program: Command, io: CliIo, outcome:
       checkDistinctOutputs([{ option: "--out", file: options.out }, { option: "--tornado", file: options.tornado }]);
       if (options.out !== undefined) checkOutputTarget(options.out, force);
       if (options.tornado !== undefined) checkOutputTarget(options.tornado, force, "--tornado");
-      const { scenario } = loadScenario(file);
+      const { scenario, source } = loadScenario(file);
+      if (scenario.programme !== undefined) {
+        // The draws recompute each alternative from its treatments over the horizon from the first year; build years would be lost.
+        throw new InputError([{ code: "not-for-programme", file, ...source.positionOf(["programme"], true), path: "programme", message: "uncertainty does not yet handle a multi-year programme", hint: "run it on a one-year scenario (without programme:), e.g. the first year's budget" }]);
+      }
       const prepared = preparePlan(scenario);
       const solveOptions = { engine };
       const result = await analyseUncertainty(prepared, {

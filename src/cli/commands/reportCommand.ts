@@ -67,7 +67,10 @@ export function registerReportCommand(program: Command, io: CliIo, outcome: Comm
       if (io.stderrIsTty) io.stderr(`solving the optimal list at ${levels.length} budget levels...\n`);
       const frontier = await budgetFrontier(prepared, levels, { engine });
       const plan = frontier.find((level) => level.budget === budget)!.plan;
-      const uncertainty = drawOptions.draws === 0 ? undefined : await analyseReportUncertainty(io, prepared, plan, drawOptions, engine);
+      // The draws do not yet model build years; the programme section says the robustness sections are left out.
+      const withDraws = drawOptions.draws > 0 && scenario.programme === undefined;
+      if (drawOptions.draws > 0 && !withDraws) io.stderr("note: the robustness and sensitivity sections are left out: the draws do not yet handle a multi-year programme\n");
+      const uncertainty = withDraws ? await analyseReportUncertainty(io, prepared, plan, drawOptions, engine) : undefined;
       const planCase = await casePlan(plan, { engine });
       const csvFileName = options.csv !== undefined ? basename(options.csv) : `${basename(options.out).replace(/\.html?$/i, "")}.csv`;
       const html = reportHtml({

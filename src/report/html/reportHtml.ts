@@ -8,6 +8,7 @@ import { planMethodNotes } from "../../analysis/planMethodNotes.js";
 import { cautionsSection } from "./cautionsSection.js";
 import { escapeHtml } from "./escapeHtml.js";
 import { exportSection } from "./exportSection.js";
+import { programmeSection } from "./programmeSection.js";
 import { notFundedSection } from "./notFundedSection.js";
 import type { ReportInput } from "./ReportInput.js";
 import { REPORT_STYLES } from "./reportStyles.js";
@@ -44,6 +45,7 @@ export function reportHtml(input: ReportInput): string {
 ${summarySection(input)}
 ${cautionsSection(planMethodNotes(input.plan).notes)}
 ${capitalListSection(input)}
+${programmeSection(input)}
 ${budgetSection(input)}
 <section id="map">
 <h2>Where the money goes</h2>

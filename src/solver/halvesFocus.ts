@@ -1,6 +1,24 @@
 import { NO_OPTION } from "./buildGroupHull.js";
 import type { Programme } from "./types.js";
 
+/** Groups with exactly tied choices from which the restriction counts as a subset-sum and gets the halves search on a part. */
+export const MIN_TIED_GROUPS = 4;
+
+/**
+ * Most rows (the budget among them) binding at the LP optimum for that subset-sum treatment: the
+ * halves search sorts by one binding row, which pays off when one other row binds beside the
+ * budget (a K+A share floor). With more, as under a programme's year rows, it does not: the
+ * five-year demo took 3–9 s without it and ran into the 60 s limit with it.
+ */
+export const MAX_BINDING_ROWS_FOR_HALVES = 2;
+
+/**
+ * Branch-and-bound nodes of the short HiGHS runs on a restriction with ties, in turn: a very
+ * short one for a first programme to search around, then a longer one (about a second on most
+ * restrictions, ten on some), before HiGHS runs to the time limit.
+ */
+export const SLICE_NODES = [10, 1_000];
+
 /** Most programmes per half of the focused search: it runs between HiGHS slices, so it stays well under a second. */
 const FOCUS_HALF_LIMIT = 1 << 18;
 

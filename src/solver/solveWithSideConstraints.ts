@@ -5,7 +5,7 @@ import { checkSolution } from "./checkSolution.js";
 import { propagateRows } from "./propagateRows.js";
 import { relaxationMultipliers } from "./relaxationMultipliers.js";
 import { runHighs } from "./runHighs.js";
-import { bindingRow, FOCUS_ROUNDS, focusChoices } from "./halvesFocus.js";
+import { bindingRow, FOCUS_ROUNDS, focusChoices, MAX_BINDING_ROWS_FOR_HALVES, MIN_TIED_GROUPS, SLICE_NODES } from "./halvesFocus.js";
 import { HALF_LIMIT, searchCoreByHalves, type CoreSearch, type CoreSearchResult } from "./searchCoreByHalves.js";
 import { OPTIMALITY_TOLERANCE } from "./solveSingleBudget.js";
 import type { EngineResult, Programme, SolveOptions } from "./types.js";
@@ -18,24 +18,6 @@ const FIRST_THRESHOLD = 1e-5;
  * are cut off and re-solved before the engine stops with the best verified programme it holds.
  */
 export const MAX_REJECTED_ANSWERS = 20;
-
-/** Groups with exactly tied choices from which the restriction counts as a subset-sum and gets the halves search on a part. */
-const MIN_TIED_GROUPS = 4;
-
-/**
- * Most rows (the budget among them) binding at the LP optimum for that subset-sum treatment: the
- * halves search sorts by one binding row, which pays off when one other row binds beside the
- * budget (a K+A share floor). With more, as under a programme's year rows, it does not: the
- * five-year demo took 3–9 s without it and ran into the 60 s limit with it.
- */
-const MAX_BINDING_ROWS_FOR_HALVES = 2;
-
-/**
- * Branch-and-bound nodes of the short HiGHS runs on a restriction with ties, in turn: a very
- * short one for a first programme to search around, then a longer one (about a second on most
- * restrictions, ten on some), before HiGHS runs to the time limit.
- */
-const SLICE_NODES = [10, 1_000];
 
 /** Largest half listed when no subset-sum is suspected: cheap next to a HiGHS run. */
 const SMALL_HALF_LIMIT = 1 << 12;

@@ -3,6 +3,7 @@
 import { mkdirSync, writeFileSync } from "node:fs";
 import { cpus } from "node:os";
 import { planBench } from "./planBench.js";
+import { formatProgrammeBench, runProgrammeBench } from "./programmeBench.js";
 import { formatCrossCheck, runCrossCheck } from "./crossCheckBench.js";
 import { formatResolveBench, runResolveBench } from "./resolveBench.js";
 import { formatSolverBench, runSolverBench } from "./solverBench.js";
@@ -22,7 +23,11 @@ console.log("\nRe-solves on one prepared programme (exact engine, in this proces
 const resolves = await runResolveBench();
 console.log(formatResolveBench(resolves));
 
-writeFileSync("bench-results/solver.json", `${JSON.stringify({ machine, highsSeconds, rows, resolves }, null, 2)}\n`);
+console.log(`\nMulti-year programmes (averta and HiGHS at gap 0, time limits ${avertaSeconds} s and ${highsSeconds} s)`);
+const programmes = await runProgrammeBench(avertaSeconds, highsSeconds);
+console.log(formatProgrammeBench(programmes));
+
+writeFileSync("bench-results/solver.json", `${JSON.stringify({ machine, highsSeconds, rows, resolves, programmes }, null, 2)}\n`);
 console.log("\nwritten: bench-results/solver.json");
 
 console.log("\nPlan at scale: YAML in, table or JSON out");

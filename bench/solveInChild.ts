@@ -7,11 +7,13 @@ import { readHighsChoice } from "../src/solver/readHighsChoice.js";
 import { runHighs } from "../src/solver/runHighs.js";
 import { solveProgramme } from "../src/solver/solveProgramme.js";
 import { generateBenchProgramme, type BenchProgrammeShape } from "./generateBenchProgramme.js";
+import { generateBenchYearProgramme, type BenchYearProgrammeShape } from "./generateBenchYearProgramme.js";
 import type { ChildRequest, ChildResult } from "./runInChild.js";
 
 async function main(): Promise<ChildResult> {
   const request = JSON.parse(process.argv[2]!) as ChildRequest;
-  const programme = generateBenchProgramme(request.shape as BenchProgrammeShape);
+  // A shape with `years` is a multi-year programme.
+  const programme = (request.shape as { years?: number }).years === undefined ? generateBenchProgramme(request.shape as BenchProgrammeShape) : generateBenchYearProgramme(request.shape as BenchYearProgrammeShape);
   // Whoever uses HiGHS loads it before the clock starts (averta only needs it for rules).
   const highs = request.solver === "highs" || programme.constraints.length > 0 ? await loadHighs() : undefined;
   const started = performance.now();

@@ -15,7 +15,8 @@ export function yearBudgets(programme: ProgrammeYears, budget: number): number[]
  * The budget rows of a programme. Carry-over `none`: each year's spend within its own budget.
  * `unspent`: what a year leaves unspent moves to later years, never forward, so the spend up to
  * each year is within the budgets up to it (the last of these is the whole budget, the
- * programme's own budget row, and is not repeated).
+ * programme's own budget row, and is not repeated; nor is a one-year programme's one row, so it
+ * is solved exactly as the one-year list at its budget).
  */
 export function programmeYearRows(sites: readonly SiteFigures[], programme: ProgrammeYears, budget: number): SideConstraint[] {
   const budgets = yearBudgets(programme, budget);
@@ -25,7 +26,7 @@ export function programmeYearRows(sites: readonly SiteFigures[], programme: Prog
   budgets.forEach((yearBudget, y) => {
     budgetSoFar += yearBudget;
     const year = programme.firstYear + y;
-    if (cumulative && y === budgets.length - 1) return;
+    if ((cumulative || budgets.length === 1) && y === budgets.length - 1) return;
     rows.push({
       id: `year-${year}`,
       label: cumulative ? `spend in ${programme.firstYear}–${year} at most the budgets of those years` : `spend in ${year} at most its budget`,

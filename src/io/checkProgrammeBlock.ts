@@ -54,7 +54,8 @@ export function checkProgrammeBlock(raw: RawScenario, treatments: ReadonlyMap<st
   const committedSites = new Set<string>();
   (programme.committed ?? []).forEach((project, index) => {
     const path: PathSegment[] = ["programme", "committed", index];
-    if (!siteIds.has(project.site)) {
+    const siteIndex = siteIds.get(project.site);
+    if (siteIndex === undefined) {
       const guess = closestName(project.site, siteIds.keys());
       problem("unknown-id", [...path, "site"], `unknown site '${project.site}'`, guess ? `did you mean '${guess}'?` : "use a site id from sites");
     } else if (committedSites.has(project.site)) {
@@ -69,6 +70,7 @@ export function checkProgrammeBlock(raw: RawScenario, treatments: ReadonlyMap<st
         problem("unknown-id", [...path, "treatments", treatmentIndex], `unknown treatment '${id}'`, guess ? `did you mean '${guess}'?` : "add it to a catalogue, or check the catalogue list");
       }
     });
+    if (siteIndex !== undefined) checkCommittedAtSite(raw, raw.sites[siteIndex]!, project, path, treatments, span, problem);
     if (!inProgramme(project.year)) {
       problem("year-outside", [...path, "year"], `${project.year} is not a year of the programme (${span})`, project.year < firstYear ? "a project built before the programme is no longer part of it: drop it (its crashes are in the next crash window)" : `use a year from ${span}`);
     }
@@ -76,13 +78,50 @@ export function checkProgrammeBlock(raw: RawScenario, treatments: ReadonlyMap<st
   raw.sites.forEach((site, index) => {
     const earliest = site.earliestYear ?? firstYear;
     const latest = site.latestYear ?? lastYear;
-    if (earliest > latest) problem("year-window", ["sites", index], `site '${site.id}' may be built from ${earliest} but only until ${latest}`, "make earliestYear no later than latestYear");
-    else if (earliest > lastYear || latest < firstYear) problem("year-outside", ["sites", index], `site '${site.id}' may be built only in ${earliest}–${latest}, outside the programme (${span})`, "widen its earliestYear/latestYear, or remove them");
+    // Only a stated pair can be reversed; one stated year beyond the programme is outside it.
+    if (site.earliestYear !== undefined && site.latestYear !== undefined && earliest > latest) problem("year-window", ["sites", index], `site '${site.id}' may be built from ${earliest} but only until ${latest}`, "make earliestYear no later than latestYear");
+    else if (earliest > lastYear || latest < firstYear) problem("year-outside", ["sites", index], `site '${site.id}' may be built only ${statedWindow(site.earliestYear, site.latestYear)}, outside the programme (${span})`, "widen its earliestYear/latestYear, or remove them");
   });
   for (const listName of ["spendCaps", "spendFloors"] as const) {
     (raw.rules?.[listName] ?? []).forEach((rule, index) => {
       if (rule.year !== undefined && !inProgramme(rule.year)) problem("year-outside", ["rules", listName, index, "year"], `${rule.year} is not a year of the programme (${span})`, `use a year from ${span}`);
       if (rule.year !== undefined && rule.share !== undefined) problem("rule-amount", ["rules", listName, index], "a rule for one year takes an amount, not a share", "write amount: 1.2M");
     });
+  }
+}
+
+function statedWindow(earliest: number | undefined, latest: number | undefined): string {
+  if (earliest !== undefined && latest !== undefined) return `in ${earliest}–${latest}`;
+  return earliest !== undefined ? `from ${earliest}` : `until ${latest}`;
+}
+
+type RawSite = RawScenario["sites"][number];
+type RawCommitted = NonNullable<NonNullable<RawScenario["programme"]>["committed"]>[number];
+
+/**
+ * A committed project must be one the site could have had: treatments that apply to its kind (and,
+ * costed per km, a length to cost them by), a year in the site's build window, and nothing a
+ * must-fund or never-fund rule at the site contradicts (the project is kept whatever the rules say).
+ */
+function checkCommittedAtSite(raw: RawScenario, site: RawSite, project: RawCommitted, path: PathSegment[], treatments: ReadonlyMap<string, Treatment>, span: string, problem: Problem): void {
+  project.treatments.forEach((id, treatmentIndex) => {
+    const treatment = treatments.get(id);
+    if (treatment === undefined) return; // reported as unknown
+    const at: PathSegment[] = [...path, "treatments", treatmentIndex];
+    if (!treatment.appliesTo.includes(site.kind)) problem("not-applicable", at, `treatment '${id}' does not apply to ${site.kind === "intersection" ? "an" : "a"} ${site.kind} (site '${site.id}')`, `it applies to: ${treatment.appliesTo.join(", ")}`);
+    else if (treatment.cost.basis === "per-km" && site.lengthKm === undefined) problem("missing-length", at, `treatment '${id}' is costed per km but site '${site.id}' has no lengthKm`, "add lengthKm to the site");
+  });
+  const earliest = site.earliestYear;
+  const latest = site.latestYear;
+  if ((earliest !== undefined && project.year < earliest) || (latest !== undefined && project.year > latest)) {
+    problem("year-window", [...path, "year"], `site '${site.id}' is committed to ${project.year} but may be built only ${statedWindow(earliest, latest)}`, `move the project into the site's window (within ${span}), or change its earliestYear/latestYear`);
+  }
+  for (const rule of raw.rules?.mustFund ?? []) {
+    const missing = (rule.treatments ?? []).filter((id) => !project.treatments.includes(id));
+    if (rule.site === site.id && missing.length > 0) problem("rule-conflict", [...path, "treatments"], `site '${site.id}' must be funded with ${missing.join(", ")}, which its committed project does not include`, "add them to the committed project, or remove the must-fund rule");
+  }
+  for (const rule of raw.rules?.neverFund ?? []) {
+    const barred = (rule.treatments ?? []).filter((id) => project.treatments.includes(id));
+    if (rule.site === site.id && barred.length > 0) problem("rule-conflict", [...path, "treatments"], `the committed project at '${site.id}' includes ${barred.join(", ")}, which a never-fund rule bars there`, "remove one of the two");
   }
 }

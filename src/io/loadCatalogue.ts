@@ -201,8 +201,9 @@ function checkPhasing(treatment: RawTreatment, index: number, source: YamlSource
     return [{ code: "phasing", ...at, message: `the phasing of '${treatment.id}' names one year twice`, hint: "give each yearsBeforeBuild once, with the share of capital spent that year" }];
   }
   const total = treatment.phasing.reduce((sum, phase) => sum + phase.share, 0);
+  // Rounded in the message, so 0.2 + 0.7 reads 0.9, not 0.8999999999999999.
   if (Math.abs(total - 1) > 1e-9) {
-    return [{ code: "phasing", ...at, message: `the phasing shares of '${treatment.id}' add up to ${total}, not 1`, hint: "make the shares add up to 1 (e.g. 0.2 the year before and 0.8 in the build year)" }];
+    return [{ code: "phasing", ...at, message: `the phasing shares of '${treatment.id}' add up to ${Number(total.toPrecision(12))}, not 1`, hint: "make the shares add up to 1 (e.g. 0.2 the year before and 0.8 in the build year)" }];
   }
   return [];
 }

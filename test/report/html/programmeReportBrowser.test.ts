@@ -59,8 +59,8 @@ describe.skipIf(!browserPresent && !process.env.CI)("programme report in headles
   });
 
   it("draws one timeline row per funded project, in its build year", async () => {
-    const rows = await page.locator("#programme-timeline g[data-site]").evaluateAll((elements) => elements.map((element) => [element.getAttribute("data-site"), Number(element.getAttribute("data-build-year"))]));
-    const expected = plan.funded.map((project) => [project.entry.site.id, project.alternative.buildYear]);
+    const rows = await page.locator("#programme-timeline g[data-site]").evaluateAll((elements) => elements.map((element) => [element.getAttribute("data-site"), Number(element.getAttribute("data-build-year"))] as const));
+    const expected = plan.funded.map((project) => [project.entry.site.id, project.alternative.buildYear] as const);
     expect(new Map(rows)).toEqual(new Map(expected));
     expect(rows.length).toBe(plan.funded.length);
   });
@@ -74,7 +74,7 @@ describe.skipIf(!browserPresent && !process.env.CI)("programme report in headles
         build: Number(group.getAttribute("data-build-year")),
         vermillion: [...group.querySelectorAll("rect")].filter((r) => r.getAttribute("fill") === "#D55E00").map(rect),
       }));
-      function rect(element: Element) {
+      function rect(element: { getBoundingClientRect(): { left: number; right: number; top: number; bottom: number } }) {
         const r = element.getBoundingClientRect();
         return { left: r.left, right: r.right, top: r.top, bottom: r.bottom };
       }

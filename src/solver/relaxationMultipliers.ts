@@ -35,6 +35,11 @@ export function relaxationMultipliers(highs: Highs, programme: Programme, deadli
   if (relaxation.status === "infeasible") return { status: "infeasible" };
   if (relaxation.status !== "optimal") return { status: "not-solved", detail: relaxation.detail };
   const { groups, constraints } = programme;
+  // HiGHS can end "optimal" with no solution to hand back (its point misses the 1e-9 row tolerance by
+  // rounding on rows of 1e7): without duals, the Lagrangian's own multipliers bound just as validly.
+  if (relaxation.rowDual.length < 1 + groups.length + constraints.length) {
+    return { status: "found", budget: dual.multipliers[0]!, constraints: Array.from(dual.multipliers.subarray(1)), method: "lagrangian" };
+  }
   return {
     status: "found",
     budget: Math.max(0, relaxation.rowDual[0]!),

@@ -25,6 +25,8 @@ export async function budgetFrontier(
   prepared: PreparedPlan,
   levels: readonly number[],
   solveOptions: Partial<SolveOptions> = {},
+  // Called after each level: a programme's levels take seconds each, so the CLI shows a bar on a terminal.
+  onLevel?: (done: number, total: number) => void,
 ): Promise<FrontierLevel[]> {
   const frontier: FrontierLevel[] = [];
   if (levels.length === 0) return frontier;
@@ -36,6 +38,7 @@ export async function budgetFrontier(
     const constraints = years === undefined ? solver.programme.constraints : build(budget).constraints;
     const solution = await solver.solve(years === undefined ? { budget } : { budget, constraints });
     frontier.push({ budget, plan: assemblePlan(prepared, budget, { ...solver.programme, budget, constraints }, solution) });
+    onLevel?.(frontier.length, levels.length);
   }
   return frontier;
 }

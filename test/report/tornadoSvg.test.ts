@@ -57,5 +57,6 @@ describe("progressBar", () => {
   it("fills in proportion and overwrites its line", () => {
     expect(progressBar(5, 10, 10)).toBe("\r[#####-----]  50% 5/10 draws");
     expect(progressBar(10, 10, 4)).toBe("\r[####] 100% 10/10 draws");
+    expect(progressBar(1, 4, 4, "budget levels")).toBe("\r[#---]  25% 1/4 budget levels");
   });
 });

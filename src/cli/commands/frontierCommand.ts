@@ -12,6 +12,7 @@ import { frontierSvg } from "../../report/frontierSvg.js";
 import { formatMoney } from "../../report/formatNumber.js";
 import { frontierTable, type FrontierContext } from "../../report/frontierTable.js";
 import type { CliIo } from "../CliIo.js";
+import { levelProgress } from "../levelProgress.js";
 import { emitOutput } from "../emitOutput.js";
 import { frontierExitCode, solveStatusNote, type CommandOutcome } from "../solveExitCode.js";
 import { parseAmountOption, parseChoiceOption, parseIntegerOption } from "../parseOptionValues.js";
@@ -68,7 +69,8 @@ export function registerFrontierCommand(program: Command, io: CliIo, outcome: Co
       if (to <= from) {
         throw new InputError([{ code: "bad-option", file: "--to", message: `${formatMoney(to)} is not above --from ${formatMoney(from)}`, hint: "give --to a larger amount than --from, e.g. --from 1M --to 5M" }]);
       }
-      const frontier = await budgetFrontier(prepared, budgetLevels(from, to, steps), { engine });
+      const frontier = await budgetFrontier(prepared, budgetLevels(from, to, steps), { engine }, levelProgress(io));
+      if (io.stderrIsTty) io.stderr("\n");
       const summary = summariseFrontier(frontier);
       const context: FrontierContext = { scenarioName: scenario.name, currency: scenario.currency, scenarioBudget: scenario.budget, objective: prepared.objective };
       const content =

@@ -17,6 +17,7 @@ import { progressBar } from "../../report/progressBar.js";
 import type { EngineName } from "../../solver/index.js";
 import { formatMoney } from "../../report/formatNumber.js";
 import type { CliIo } from "../CliIo.js";
+import { levelProgress } from "../levelProgress.js";
 import { solveExitCode, solveStatusNote, type CommandOutcome } from "../solveExitCode.js";
 import { addDrawOptions, parseDrawOptions, type DrawOptions, type DrawOptionText } from "../drawOptions.js";
 import { parseAmountOption, parseChoiceOption, parseIntegerOption } from "../parseOptionValues.js";
@@ -64,8 +65,8 @@ export function registerReportCommand(program: Command, io: CliIo, outcome: Comm
       const prepared = preparePlan(scenario);
       // The chosen budget joins the evenly spaced levels so the slider can return to it exactly.
       const levels = [...new Set([...budgetLevels(0, fullFundingCost(prepared), steps), budget])].sort((a, b) => a - b);
-      if (io.stderrIsTty) io.stderr(`solving the optimal list at ${levels.length} budget levels...\n`);
-      const frontier = await budgetFrontier(prepared, levels, { engine });
+      const frontier = await budgetFrontier(prepared, levels, { engine }, levelProgress(io));
+      if (io.stderrIsTty) io.stderr("\n");
       const plan = frontier.find((level) => level.budget === budget)!.plan;
       // The draws do not yet model build years; the programme section says the robustness sections are left out.
       const withDraws = drawOptions.draws > 0 && scenario.programme === undefined;

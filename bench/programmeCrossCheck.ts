@@ -165,3 +165,17 @@ export async function runProgrammeCrossCheck(first: number, count: number, timeL
   const failures = cases.filter((c) => statusWrong(c) || objectiveWrong(c) || c.avertaViolations.length > 0 || c.enumerationDiffers || c.figureMismatches.length > 0 || undecided(c));
   return { summary, failures, cases };
 }
+
+/** The summary as lines for `npm run bench`, each count beside its target. */
+export function formatProgrammeCrossCheck(summary: ProgrammeCrossCheckSummary): string {
+  return [
+    `  programmes: ${summary.cases} (${summary.withRules} with rules, ${summary.infeasible} infeasible by the reference; up to ${summary.largestSites} sites, ${summary.largestOptions} options)`,
+    `  status mismatches: ${summary.statusMismatches} (target 0)`,
+    `  cases the reference could not decide within its time limit: ${summary.referenceUndecided} (target 0)`,
+    `  objective mismatches (> ${PROGRAMME_OBJECTIVE_TOLERANCE} relative): ${summary.objectiveMismatches} (target 0)`,
+    `  programmes breaking a rule or a year budget: ${summary.infeasibleAnswers} (target 0)`,
+    `  option enumeration / spend-by-year mismatches: ${summary.enumerationMismatches} / ${summary.figureMismatches} (target 0)`,
+    `  seconds: averta ${summary.avertaSeconds.toFixed(1)}, reference ${summary.referenceSeconds.toFixed(1)}`,
+    `  programmes with: ${Object.entries(summary.coverage).sort(([a], [b]) => (a < b ? -1 : 1)).map(([what, n]) => `${what} ${n}`).join(", ")}`,
+  ].join("\n");
+}

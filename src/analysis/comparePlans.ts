@@ -1,5 +1,6 @@
 import type { Alternative } from "../model/types.js";
-import type { FundedProject, PlanResult } from "./planProgramme.js";
+import type { FundedProject } from "./fundedProject.js";
+import type { PlanResult } from "./planProgramme.js";
 import type { ProgrammeTotals } from "./summariseSelection.js";
 import type { SolveStatus } from "../solver/index.js";
 

@@ -1,7 +1,7 @@
 import { buildYears } from "../model/buildYears.js";
 import type { ProgrammeYears } from "../model/programmeTypes.js";
 import type { Alternative } from "../model/types.js";
-import type { FundedProject } from "./planProgramme.js";
+import type { FundedProject } from "./fundedProject.js";
 import type { ProgrammeYearSummary } from "./summariseYears.js";
 
 /** Why a funded project is in its build year and not earlier, and what a one-year delay of it alone would cost. */

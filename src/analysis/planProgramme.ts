@@ -1,19 +1,10 @@
-import type { SiteAlternatives } from "../model/buildAlternatives.js";
-import type { Alternative } from "../model/types.js";
 import { solveProgramme, type Programme, type Solution, type SolveOptions } from "../solver/index.js";
 import { buildProgramme } from "./buildProgramme.js";
+import type { FundedProject } from "./fundedProject.js";
 import type { PreparedPlan } from "./preparePlan.js";
 import { justifyTiming, type ProjectTiming } from "./justifyTiming.js";
 import { summariseSelection, type ProgrammeTotals } from "./summariseSelection.js";
 import { summariseYears, type ProgrammeYearSummary } from "./summariseYears.js";
-
-/** One funded project: a site and the alternative chosen there. */
-export interface FundedProject {
-  readonly entry: SiteAlternatives;
-  readonly alternative: Alternative;
-  /** Index of the alternative within its site's alternatives. */
-  readonly index: number;
-}
 
 /** The optimal capital list at one budget, with what it achieves. */
 export interface PlanResult {

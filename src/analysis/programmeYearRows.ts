@@ -1,6 +1,9 @@
 import type { ProgrammeYears } from "../model/programmeTypes.js";
 import type { SideConstraint } from "../solver/index.js";
-import type { SiteFigures } from "./buildProgramme.js";
+import type { Alternative } from "../model/types.js";
+
+/** What the year rows read of a site: each alternative's spend by year (or its cost, all in the first year). */
+type SiteSpend = { readonly alternatives: readonly Pick<Alternative, "cost" | "spendByYear">[] };
 
 /**
  * Each year's budget at a total budget of `budget`: the scenario's years scaled by one factor, so
@@ -18,7 +21,7 @@ export function yearBudgets(programme: ProgrammeYears, budget: number): number[]
  * programme's own budget row, and is not repeated; nor is a one-year programme's one row, so it
  * is solved exactly as the one-year list at its budget).
  */
-export function programmeYearRows(sites: readonly SiteFigures[], programme: ProgrammeYears, budget: number): SideConstraint[] {
+export function programmeYearRows(sites: readonly SiteSpend[], programme: ProgrammeYears, budget: number): SideConstraint[] {
   const budgets = yearBudgets(programme, budget);
   const cumulative = programme.carryOver === "unspent";
   const rows: SideConstraint[] = [];

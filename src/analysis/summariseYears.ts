@@ -1,5 +1,5 @@
 import type { ProgrammeYears } from "../model/programmeTypes.js";
-import type { FundedProject } from "./planProgramme.js";
+import type { FundedProject } from "./fundedProject.js";
 import { yearBudgets } from "./programmeYearRows.js";
 
 /** One year of a programme: its budget and spend, what carries over, and what the projects built in it achieve. */

@@ -1,5 +1,5 @@
 import type { FundedCase } from "../../analysis/justifyPlan.js";
-import type { FundedProject } from "../../analysis/planProgramme.js";
+import type { FundedProject } from "../../analysis/fundedProject.js";
 import type { UpgradeCheck } from "../../analysis/upgradeChecks.js";
 import type { Scenario } from "../../model/types.js";
 import { formatFixed, formatMoney } from "../formatNumber.js";

@@ -12,7 +12,7 @@ import { formatMoney } from "../../report/formatNumber.js";
 import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
 import { solveExitCode, solveStatusNote, type CommandOutcome } from "../solveExitCode.js";
-import { parseAmountOption, parseChoiceOption } from "../parseOptionValues.js";
+import { parseAmountOption, parseChoiceOption, parseIntegerOption } from "../parseOptionValues.js";
 import { ENGINES } from "./planCommand.js";
 
 interface CompareOptions {
@@ -21,6 +21,7 @@ interface CompareOptions {
   out?: string;
   force?: boolean;
   engine: string;
+  timeLimit: string;
 }
 
 /**
@@ -38,9 +39,11 @@ export function registerCompareCommand(program: Command, io: CliIo, outcome: Com
     .option("-o, --out <file>", "write to this file instead of standard output")
     .option("--force", "replace --out if it already exists")
     .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
+    .option("--time-limit <seconds>", "longest each solve may run before it returns its best verified list, marked time-limit with its gap (whole seconds)", "60")
     .action(async (file: string, other: string | undefined, options: CompareOptions) => {
       const format = parseChoiceOption("--format", options.format, ["table", "json", "csv"] as const);
       const engine = parseChoiceOption("--engine", options.engine, ENGINES);
+      const solve = { engine, timeLimitSeconds: parseIntegerOption("--time-limit", options.timeLimit, 1, 86_400) };
       const budgets = options.budget.map((text) => parseAmountOption("--budget", text));
       if (other === undefined && budgets.length !== 2) {
         throw new InputError([{ code: "bad-option", file: "--budget", message: `compare with one scenario needs exactly two budgets, got ${budgets.length}`, hint: "write --budget 5M --budget 9.7M, or name a second scenario" }]);
@@ -55,8 +58,8 @@ export function registerCompareCommand(program: Command, io: CliIo, outcome: Com
       const preparedB = other === undefined ? preparedA : preparePlan(scenarioB);
       const budgetA = budgets[0] ?? scenarioA.budget;
       const budgetB = other === undefined ? budgets[1]! : (budgets[0] ?? scenarioB.budget);
-      const planA = await planProgramme(preparedA, budgetA, { engine });
-      const planB = await planProgramme(preparedB, budgetB, { engine });
+      const planA = await planProgramme(preparedA, budgetA, solve);
+      const planB = await planProgramme(preparedB, budgetB, solve);
       const labels: CompareLabels =
         other === undefined
           ? { a: `budget ${formatMoney(budgetA)}`, b: `budget ${formatMoney(budgetB)}`, currency: scenarioA.currency }

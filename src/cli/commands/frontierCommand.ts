@@ -27,6 +27,7 @@ interface FrontierOptions {
   chart?: string;
   force?: boolean;
   engine: string;
+  timeLimit: string;
 }
 
 /**
@@ -47,9 +48,11 @@ export function registerFrontierCommand(program: Command, io: CliIo, outcome: Co
     .option("--chart <file.svg>", "also write an SVG chart of K+A crashes avoided against budget")
     .option("--force", "replace --out or --chart if it already exists")
     .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
+    .option("--time-limit <seconds>", "longest each solve may run before it returns its best verified list, marked time-limit with its gap (whole seconds)", "60")
     .action(async (file: string, options: FrontierOptions) => {
       const format = parseChoiceOption("--format", options.format, FORMATS);
       const engine = parseChoiceOption("--engine", options.engine, ENGINES);
+      const solve = { engine, timeLimitSeconds: parseIntegerOption("--time-limit", options.timeLimit, 1, 86_400) };
       const steps = parseIntegerOption("--steps", options.steps, 1, 500);
       const from = options.from === undefined ? 0 : parseAmountOption("--from", options.from);
       const force = options.force === true;
@@ -69,7 +72,7 @@ export function registerFrontierCommand(program: Command, io: CliIo, outcome: Co
       if (to <= from) {
         throw new InputError([{ code: "bad-option", file: "--to", message: `${formatMoney(to)} is not above --from ${formatMoney(from)}`, hint: "give --to a larger amount than --from, e.g. --from 1M --to 5M" }]);
       }
-      const frontier = await budgetFrontier(prepared, budgetLevels(from, to, steps), { engine }, levelProgress(io));
+      const frontier = await budgetFrontier(prepared, budgetLevels(from, to, steps), solve, levelProgress(io));
       if (io.stderrIsTty) io.stderr("\n");
       const summary = summariseFrontier(frontier);
       const context: FrontierContext = { scenarioName: scenario.name, currency: scenario.currency, scenarioBudget: scenario.budget, objective: prepared.objective };

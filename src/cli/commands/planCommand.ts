@@ -18,7 +18,7 @@ import type { CliIo } from "../CliIo.js";
 import { emitOutput } from "../emitOutput.js";
 import { jsonChunks } from "../../report/jsonChunks.js";
 import { solveExitCode, solveStatusNote, type CommandOutcome } from "../solveExitCode.js";
-import { parseAmountOption, parseChoiceOption } from "../parseOptionValues.js";
+import { parseAmountOption, parseChoiceOption, parseIntegerOption } from "../parseOptionValues.js";
 
 export const ENGINES: readonly EngineName[] = ["auto", "exact", "lp-solver", "highs"];
 export const FORMATS = ["table", "json", "csv"] as const;
@@ -30,6 +30,7 @@ interface PlanOptions {
   out?: string;
   force?: boolean;
   engine: string;
+  timeLimit: string;
   all?: boolean;
 }
 
@@ -46,18 +47,20 @@ export function registerPlanCommand(program: Command, io: CliIo, outcome: Comman
     .option("--force", "replace --out if it already exists")
     .option("--all", `list every project in the table, not only the ${PLAN_TABLE_ROWS} with the most value`)
     .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
+    .option("--time-limit <seconds>", "longest each solve may run before it returns its best verified list, marked time-limit with its gap (whole seconds)", "60")
     .action(async (file: string, options: PlanOptions) => {
       const format = parseChoiceOption("--format", options.format, FORMATS);
       const engine = parseChoiceOption("--engine", options.engine, ENGINES);
+      const solve = { engine, timeLimitSeconds: parseIntegerOption("--time-limit", options.timeLimit, 1, 86_400) };
       const objective = options.objective === undefined ? undefined : parseChoiceOption<Objective>("--objective", options.objective, ["ksi", "benefit"]);
       const budget = options.budget === undefined ? undefined : parseAmountOption("--budget", options.budget);
       if (options.out !== undefined) checkOutputTarget(options.out, options.force === true);
       const { scenario, warnings } = loadScenario(file);
       if (warnings.length > 0) io.stderr(`note: ${warnings.length} warning(s) about the input; 'averta check ${file}' lists them\n`);
       for (const warning of warnings) if (warning.code === "eb-fallback") io.stderr(`warning: ${formatProblem(warning)}\n`);
-      const result = await planProgramme(preparePlan(scenario, objective), budget ?? scenario.budget, { engine });
+      const result = await planProgramme(preparePlan(scenario, objective), budget ?? scenario.budget, solve);
       // Without a list there is nothing to justify: the diagnosis says why.
-      const planCase = format === "csv" || !hasList(result) ? undefined : await casePlan(result, { engine });
+      const planCase = format === "csv" || !hasList(result) ? undefined : await casePlan(result, solve);
       const content =
         format === "json"
           ? withNewline(jsonChunks({ ...planJson(result), justification: planCase ? justificationJson(planCase) : null }))

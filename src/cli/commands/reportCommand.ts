@@ -30,6 +30,7 @@ interface ReportOptions extends DrawOptionText {
   steps: string;
   csv?: string;
   engine: string;
+  timeLimit: string;
 }
 
 /**
@@ -49,9 +50,11 @@ export function registerReportCommand(program: Command, io: CliIo, outcome: Comm
     .option("--steps <n>", "budget steps on the frontier chart and slider, from 0 to the cost of every site's best option", "20")
     .option("--csv <file>", "also write the capital list as CSV")
     .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
+    .option("--time-limit <seconds>", "longest each solve may run before it returns its best verified list, marked time-limit with its gap (whole seconds)", "60")
     .action(async (file: string, options: ReportOptions) => {
       const steps = parseIntegerOption("--steps", options.steps, 1, 200);
       const engine = parseChoiceOption("--engine", options.engine, ENGINES);
+      const solve = { engine, timeLimitSeconds: parseIntegerOption("--time-limit", options.timeLimit, 1, 86_400) };
       const drawOptions = parseDrawOptions(options, 0);
       const requestedBudget = options.budget === undefined ? undefined : parseAmountOption("--budget", options.budget);
       const force = options.force === true;
@@ -65,14 +68,14 @@ export function registerReportCommand(program: Command, io: CliIo, outcome: Comm
       const prepared = preparePlan(scenario);
       // The chosen budget joins the evenly spaced levels so the slider can return to it exactly.
       const levels = [...new Set([...budgetLevels(0, fullFundingCost(prepared), steps), budget])].sort((a, b) => a - b);
-      const frontier = await budgetFrontier(prepared, levels, { engine }, levelProgress(io));
+      const frontier = await budgetFrontier(prepared, levels, solve, levelProgress(io));
       if (io.stderrIsTty) io.stderr("\n");
       const plan = frontier.find((level) => level.budget === budget)!.plan;
       // The draws do not yet model build years; the programme section says the robustness sections are left out.
       const withDraws = drawOptions.draws > 0 && scenario.programme === undefined;
       if (drawOptions.draws > 0 && !withDraws) io.stderr("note: the robustness and sensitivity sections are left out: the draws do not yet handle a multi-year programme\n");
       const uncertainty = withDraws ? await analyseReportUncertainty(io, prepared, plan, drawOptions, engine) : undefined;
-      const planCase = await casePlan(plan, { engine });
+      const planCase = await casePlan(plan, solve);
       const csvFileName = options.csv !== undefined ? basename(options.csv) : `${basename(options.out).replace(/\.html?$/i, "")}.csv`;
       const html = reportHtml({
         plan,

@@ -7,7 +7,7 @@ export interface HighsRun {
   readonly status: "optimal" | "infeasible" | "time-limit" | "failed";
   /** Column values; empty when HiGHS holds no feasible point. */
   readonly colValue: Float64Array;
-  /** Row duals (LP runs only; for a maximisation a binding <= row has a positive dual). */
+  /** Row duals (LP runs only, when HiGHS calls them feasible; for a maximisation a binding <= row has a positive dual). */
   readonly rowDual: Float64Array;
   /** Proven upper bound (MIP dual bound, or the LP optimum). */
   readonly bound: number;
@@ -64,8 +64,10 @@ export function runHighs(highs: Highs, data: ModelData, settings: HighsRunSettin
     const codes = highs.constants.modelStatus;
     const integer = data.integrality !== undefined;
     const hasPoint = Number(model.info.get("primal_solution_status")) === 2;
-    const solution = hasPoint ? model.getSolution() : undefined;
-    const colValue = solution?.colValue ?? new Float64Array(0);
+    // An LP's duals can be feasible when its point misses the 1e-9 row tolerance by rounding: keep them.
+    const hasDuals = !integer && Number(model.info.get("dual_solution_status")) === 2;
+    const solution = hasPoint || hasDuals ? model.getSolution() : undefined;
+    const colValue = hasPoint ? solution!.colValue : new Float64Array(0);
     const rowDual = !integer && solution !== undefined ? solution.rowDual : new Float64Array(0);
     const bound = integer ? Number(model.info.get("mip_dual_bound")) : hasPoint ? model.getObjectiveValue() : Number.NaN;
     if (modelStatus === codes.optimal) return { status: "optimal", colValue, rowDual, bound, detail: "optimal" };

@@ -1,6 +1,7 @@
 import { buildCrashMatrix } from "../src/model/crashMatrix.js";
 import { createPcg32, type RandomSource } from "../src/model/random/pcg32.js";
-import { CRASH_TYPES, type CrashType, type PolicyRule, type Scenario, type Site, type Treatment } from "../src/model/types.js";
+import { CRASH_TYPES, type CrashType, type Scenario, type Site, type Treatment } from "../src/model/types.js";
+import type { PolicyRule } from "../src/model/policyRule.js";
 
 const DISTRICTS = ["North", "South", "East"] as const;
 const TAGS = ["school-zone", "priority-community"] as const;

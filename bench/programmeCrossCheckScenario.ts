@@ -1,7 +1,8 @@
 import { buildCrashMatrix } from "../src/model/crashMatrix.js";
 import type { CapitalPhase, CommittedProject, ProgrammeYears } from "../src/model/programmeTypes.js";
 import { createPcg32 } from "../src/model/random/pcg32.js";
-import type { PolicyRule, RenewalRule, Scenario, Site, Treatment } from "../src/model/types.js";
+import type { RenewalRule, Scenario, Site, Treatment } from "../src/model/types.js";
+import type { PolicyRule } from "../src/model/policyRule.js";
 import { crossCheckScenario } from "./crossCheckScenario.js";
 
 const DISTRICTS = ["North", "South", "East"] as const;

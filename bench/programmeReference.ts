@@ -3,7 +3,8 @@ import { alternativeInBuildYear } from "../src/model/alternativeInBuildYear.js";
 import { siteBaselines } from "../src/model/siteBaselines.js";
 import { treatmentCapitalCost } from "../src/model/treatmentCapitalCost.js";
 import { treatmentCmf } from "../src/model/treatmentCmf.js";
-import type { PolicyRule, Scenario, Site, Treatment } from "../src/model/types.js";
+import type { Scenario, Site, Treatment } from "../src/model/types.js";
+import type { PolicyRule } from "../src/model/policyRule.js";
 import { programmeViolations, type ProgrammeReferenceOption } from "./programmeViolations.js";
 
 // The package is CommonJS typed as an ES default export: at run time the default import is the loader.

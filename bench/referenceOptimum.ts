@@ -1,7 +1,8 @@
 import highsModule from "highs";
 import { evaluateAlternative } from "../src/model/evaluateAlternative.js";
 import { siteBaselines } from "../src/model/siteBaselines.js";
-import type { Objective, PolicyRule, Scenario, Site } from "../src/model/types.js";
+import type { Objective, Scenario, Site } from "../src/model/types.js";
+import type { PolicyRule } from "../src/model/policyRule.js";
 
 // The package is CommonJS typed as an ES default export: at run time the default import is the loader.
 const highsLoader = ((highsModule as unknown as { default?: unknown }).default ?? highsModule) as unknown as typeof highsModule.default;

@@ -1,4 +1,5 @@
-import type { Alternative, Objective, PolicyRule, Site } from "../model/types.js";
+import type { Alternative, Objective, Site } from "../model/types.js";
+import type { PolicyRule } from "../model/policyRule.js";
 import type { ProgrammeYears } from "../model/programmeTypes.js";
 import type { Programme, SideConstraint } from "../solver/index.js";
 import { programmeYearRows } from "./programmeYearRows.js";

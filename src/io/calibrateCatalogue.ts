@@ -1,6 +1,7 @@
 import { estimateCalibrationFactor } from "../model/estimateCalibrationFactor.js";
 import { empiricalBayesGap } from "../model/siteBaselines.js";
-import type { Catalogue, SafetyPerformanceFunction, Site, SpfCalibration } from "../model/types.js";
+import type { Catalogue, SafetyPerformanceFunction, Site } from "../model/types.js";
+import type { SpfCalibration } from "../model/spfCalibration.js";
 
 /**
  * The catalogue with each calibrated SPF's factor set: a given number, or an estimate from the

@@ -1,20 +1,7 @@
 import { completeCrashMatrix } from "../model/crashMatrix.js";
 import { resolveCrashCosts, type StatedCrashCosts } from "../model/resolveCrashCosts.js";
-import type {
-  AreaType,
-  BaselineMethod,
-  Catalogue,
-  CmfCombinationRule,
-  CrashType,
-  Objective,
-  PolicyRule,
-  RenewalRule,
-  Scenario,
-  Severity,
-  Site,
-  SiteKind,
-  UncertaintySettings,
-} from "../model/types.js";
+import type { AreaType, BaselineMethod, Catalogue, CmfCombinationRule, CrashType, Objective, RenewalRule, Scenario, Severity, Site, SiteKind, UncertaintySettings } from "../model/types.js";
+import type { PolicyRule } from "../model/policyRule.js";
 import type { CarryOverRule, ProgrammeYears } from "../model/programmeTypes.js";
 import { calibrateCatalogue } from "./calibrateCatalogue.js";
 import { checkAlternativeCounts } from "./checkAlternativeCounts.js";

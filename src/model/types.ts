@@ -2,7 +2,9 @@
  * The core vocabulary of averta: plain, read-only data shared by every stage.
  * Money is in the scenario's currency units; years are whole years; rates are fractions.
  */
+import type { PolicyRule } from "./policyRule.js";
 import type { CapitalPhase, ProgrammeYears } from "./programmeTypes.js";
+import type { SpfCalibration } from "./spfCalibration.js";
 
 /** KABCO injury severity of a crash (its most severe injury). K+A are the KSI crashes. */
 export type Severity = "K" | "A" | "B" | "C" | "O";
@@ -199,36 +201,6 @@ export interface UncertaintySettings {
 export type BaselineMethod = "auto" | "observed" | "empirical-bayes";
 /** The method actually used at one site. */
 export type SiteBaselineMethod = "observed" | "empirical-bayes";
-
-/**
- * A policy rule of the scenario. Spending, KSI-share and count rules cover one district, one tag,
- * or (neither) all sites; spending rules give an absolute amount or a share of total spend.
- */
-export type PolicyRule =
-  | { readonly kind: "must-fund"; readonly site: string; readonly treatments: readonly string[] }
-  | { readonly kind: "never-fund"; readonly site: string; readonly treatments: readonly string[] }
-  | {
-      readonly kind: "spend-cap" | "spend-floor";
-      readonly district?: string;
-      readonly tag?: string;
-      readonly amount?: number;
-      /** In a programme: the rule covers this year's spend only. */
-      readonly year?: number;
-      readonly share?: number;
-    }
-  | { readonly kind: "ksi-share-floor"; readonly district?: string; readonly tag?: string; readonly share: number }
-  | { readonly kind: "max-projects"; readonly district?: string; readonly tag?: string; readonly count: number };
-
-/** How one SPF's local calibration factor was set. */
-export interface SpfCalibration {
-  readonly performanceFunction: string;
-  readonly factor: number;
-  readonly method: "given" | "estimated";
-  /** For an estimate: the sites, observed crashes and SPF-predicted crashes over the window behind it. */
-  readonly sites?: number;
-  readonly observedCrashes?: number;
-  readonly predictedCrashes?: number;
-}
 
 export interface Scenario {
   readonly name: string;

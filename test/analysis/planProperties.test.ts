@@ -2,7 +2,8 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { planProgramme, type PlanResult } from "../../src/analysis/planProgramme.js";
 import { preparePlan } from "../../src/analysis/preparePlan.js";
-import type { PolicyRule, Scenario } from "../../src/model/types.js";
+import type { Scenario } from "../../src/model/types.js";
+import type { PolicyRule } from "../../src/model/policyRule.js";
 import { randomScenario } from "./randomScenario.js";
 import { bruteForceKsi, ruleViolations, type Pick } from "./scenarioRules.js";
 

@@ -1,7 +1,8 @@
 import { completeCrashMatrix } from "../../src/model/crashMatrix.js";
 import type { CapitalPhase, CommittedProject } from "../../src/model/programmeTypes.js";
 import { createPcg32 } from "../../src/model/random/pcg32.js";
-import type { PolicyRule, Scenario, Site, Treatment } from "../../src/model/types.js";
+import type { Scenario, Site, Treatment } from "../../src/model/types.js";
+import type { PolicyRule } from "../../src/model/policyRule.js";
 
 const DISTRICTS = ["North", "South"] as const;
 const PHASINGS: readonly (readonly CapitalPhase[])[] = [

@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { completeCrashMatrix } from "../../src/model/crashMatrix.js";
-import type { PolicyRule, Scenario, Site, Treatment } from "../../src/model/types.js";
+import type { Scenario, Site, Treatment } from "../../src/model/types.js";
+import type { PolicyRule } from "../../src/model/policyRule.js";
 
 const DISTRICTS = ["North", "South"] as const;
 

@@ -4,7 +4,8 @@ import { crossCheckScenario } from "../../bench/crossCheckScenario.js";
 import type { PlanResult } from "../../src/analysis/planProgramme.js";
 import type { CapitalPhase, CommittedProject, ProgrammeYears } from "../../src/model/programmeTypes.js";
 import { createPcg32 } from "../../src/model/random/pcg32.js";
-import type { PolicyRule, Scenario, Site } from "../../src/model/types.js";
+import type { Scenario, Site } from "../../src/model/types.js";
+import type { PolicyRule } from "../../src/model/policyRule.js";
 
 /**
  * Seeded programmes for metamorphic tests, and an independent reading of a programme's year

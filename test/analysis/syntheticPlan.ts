@@ -1,7 +1,8 @@
 import type { PreparedPlan } from "../../src/analysis/preparePlan.js";
 import type { SiteAlternatives } from "../../src/model/buildAlternatives.js";
 import { completeCrashMatrix } from "../../src/model/crashMatrix.js";
-import type { Alternative, Objective, PolicyRule, Scenario, Site } from "../../src/model/types.js";
+import type { Alternative, Objective, Scenario, Site } from "../../src/model/types.js";
+import type { PolicyRule } from "../../src/model/policyRule.js";
 import { seededRandom } from "../../scripts/seededRandom.js";
 
 export { seededRandom };

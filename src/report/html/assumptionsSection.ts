@@ -1,5 +1,6 @@
 import type { PlanResult } from "../../analysis/planProgramme.js";
-import type { PolicyRule, Severity } from "../../model/types.js";
+import type { Severity } from "../../model/types.js";
+import type { PolicyRule } from "../../model/policyRule.js";
 import { CRASH_TYPES, SEVERITIES } from "../../model/types.js";
 import { describeAssumptions } from "../describeAssumptions.js";
 import { formatFixed, formatMoney } from "../formatNumber.js";

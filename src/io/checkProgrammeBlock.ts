@@ -72,7 +72,7 @@ export function checkProgrammeBlock(raw: RawScenario, treatments: ReadonlyMap<st
     });
     if (siteIndex !== undefined) checkCommittedAtSite(raw, raw.sites[siteIndex]!, project, path, treatments, span, problem);
     if (!inProgramme(project.year)) {
-      problem("year-outside", [...path, "year"], `${project.year} is not a year of the programme (${span})`, project.year < firstYear ? "a project built before the programme is no longer part of it: drop it (its crashes are in the next crash window)" : `use a year from ${span}`);
+      problem("year-outside", [...path, "year"], `${project.year} is not a year of the programme (${span})`, project.year < firstYear ? "a project built before the first year is no longer part of the programme: drop it from committed, and keep its site out with a neverFund rule, as the yearly routine in the README does" : `use a year from ${span}`);
     }
   });
   raw.sites.forEach((site, index) => {

@@ -1,10 +1,11 @@
+import { alternativeCells } from "./alternativeCells.js";
 import { avoidedOverSpans } from "./avoidedOverSpans.js";
 import type { CellCmf } from "./combineCmfs.js";
 import { lifecycleCostPV } from "./lifecycleCostPV.js";
 import { serviceSpans } from "./serviceSpans.js";
 import { treatmentCmf } from "./treatmentCmf.js";
 import { treatmentCapitalCost } from "./treatmentCapitalCost.js";
-import { CRASH_TYPES, SEVERITIES, type Alternative, type CrashMatrix, type Economics, type RenewalRule, type Severity, type Site, type Treatment } from "./types.js";
+import { SEVERITIES, type Alternative, type CrashMatrix, type Economics, type RenewalRule, type Severity, type Site, type Treatment } from "./types.js";
 import { benefitCostRatio } from "./benefitCostRatio.js";
 
 /** How benefits are counted when treatments in one alternative have different service lives, by renewal rule. */
@@ -49,33 +50,20 @@ export function evaluateAlternative(
     0,
   );
 
-  // The non-empty cells (most of a site's crash matrix is empty) and each treatment's CMF in them,
-  // looked up once: cmfs[c * n + i] for cell c and treatment i.
   const n = treatments.length;
-  const cellExpected: number[] = [];
-  const cellSeverity: number[] = [];
-  const cmfs: number[] = [];
-  for (const type of CRASH_TYPES) {
-    SEVERITIES.forEach((severity, s) => {
-      const expected = expectedPerYear[type][severity];
-      if (expected === 0) return;
-      cellExpected.push(expected);
-      cellSeverity.push(s);
-      for (const treatment of treatments) cmfs.push(cellCmf(treatment, type, severity));
-    });
-  }
+  const cells = alternativeCells(treatments, expectedPerYear, cellCmf);
   const spans = serviceSpans(treatments.map((t) => t.serviceLifeYears), economics, crashGrowthPerYear);
   const figures = { ksiAvoided: 0, benefitPV: 0 };
   const firstYear = new Float64Array(SEVERITIES.length);
   const costPerCrash = Float64Array.from(SEVERITIES, (severity) => crashCosts.perCrash[severity]);
-  avoidedOverSpans(spans, cellExpected.length, Float64Array.from(cellExpected), Int32Array.from(cellSeverity), Float64Array.from(cmfs), economics.cmfCombination, costPerCrash, new Float64Array(n), figures, firstYear);
+  avoidedOverSpans(spans, cells.count, cells.expected, cells.severity, cells.cmfs, economics.cmfCombination, costPerCrash, new Float64Array(n), figures, firstYear);
   const { ksiAvoided, benefitPV } = figures;
   // Cells where more than one treatment acts (CMF ≠ 1): their combination rule matters.
   let sharedCells = 0;
   if (n > 1) {
-    for (let c = 0; c < cellExpected.length; c += 1) {
+    for (let c = 0; c < cells.count; c += 1) {
       let acting = 0;
-      for (let i = 0; i < n; i += 1) if (cmfs[c * n + i] !== 1) acting += 1;
+      for (let i = 0; i < n; i += 1) if (cells.cmfs[c * n + i] !== 1) acting += 1;
       if (acting > 1) sharedCells += 1;
     }
   }

@@ -7,6 +7,20 @@ export function yearsInService(serviceLifeYears: number, horizonYears: number, r
   return renewal === "renew" ? horizonYears : Math.min(serviceLifeYears, horizonYears);
 }
 
+/** How often a treatment is renewed within the horizon, and the unexpired years of its last installation there (0 without residual value). */
+export function renewalSchedule(serviceLifeYears: number, horizonYears: number, renewal: RenewalRule): { readonly renewals: number; readonly unexpiredYears: number } {
+  let renewals = 0;
+  let lastInstalled = 0;
+  if (renewal === "renew") {
+    for (let year = serviceLifeYears; year < horizonYears; year += serviceLifeYears) {
+      renewals += 1;
+      lastInstalled = year;
+    }
+  }
+  const unexpired = lastInstalled + serviceLifeYears - horizonYears;
+  return { renewals, unexpiredYears: renewal !== "none" && unexpired > 0 ? unexpired : 0 };
+}
+
 /**
  * Lifecycle cost PV of one treatment at one site: capital now, upkeep each year it is in service,
  * and by the renewal rule:

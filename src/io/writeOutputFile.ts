@@ -18,7 +18,7 @@ const HOST = createHash("sha256").update(hostname()).digest("hex").slice(0, 6);
 const TEMPORARY = new RegExp(`^\\..*\\.averta-${HOST}-(\\d+)-[0-9a-f]{8}\\.tmp$`);
 
 /**
- * Writes `content` to `file` so that a reader never sees half a file and nothing of a failed
+ * Writes `content` (text, or bytes such as a workbook) to `file` so that a reader never sees half a file and nothing of a failed
  * write is left: a temporary file in the same folder, written to its end and fsync'd, then
  * renamed over the target with `force`, or hard-linked to a name that must not exist yet
  * without it (link fails if another run got there first, so of two runs exactly one wins).
@@ -26,7 +26,7 @@ const TEMPORARY = new RegExp(`^\\..*\\.averta-${HOST}-(\\d+)-[0-9a-f]{8}\\.tmp$`
  * temporaries of processes that no longer run. Never replaces a folder, device, FIFO or socket,
  * nor a file this run has read. `option` names the command-line option that gave the path.
  */
-export function writeOutputFile(file: string, content: string | Iterable<string>, force: boolean, option = "--out"): void {
+export function writeOutputFile(file: string, content: string | Uint8Array | Iterable<string>, force: boolean, option = "--out"): void {
   checkOutputTarget(file, force, option);
   const folder = dirname(file);
   removeStaleTemporaries(folder);
@@ -34,7 +34,8 @@ export function writeOutputFile(file: string, content: string | Iterable<string>
   try {
     const descriptor = openSync(temporary, "wx");
     try {
-      for (const piece of typeof content === "string" ? [content] : inBatches(content)) writeAllSync(descriptor, Buffer.from(piece, "utf8"));
+      if (content instanceof Uint8Array) writeAllSync(descriptor, content);
+      else for (const piece of typeof content === "string" ? [content] : inBatches(content)) writeAllSync(descriptor, Buffer.from(piece, "utf8"));
       fsyncSync(descriptor);
     } finally {
       closeSync(descriptor);

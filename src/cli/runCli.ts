@@ -14,6 +14,7 @@ import { registerUncertaintyCommand } from "./commands/uncertaintyCommand.js";
 import { registerReportCommand } from "./commands/reportCommand.js";
 import { registerScreenCommand } from "./commands/screenCommand.js";
 import { registerTallyCommand } from "./commands/tallyCommand.js";
+import { registerWorkbookCommand } from "./commands/workbookCommand.js";
 
 /**
  * Exit codes: 0 success, 1 internal fault, 2 bad input or usage; 3 no feasible list and 4 no list
@@ -36,6 +37,7 @@ export function createProgram(io: CliIo, outcome: CommandOutcome = { exitCode: E
   registerPlanCommand(program, io, outcome);
   registerUncertaintyCommand(program, io, outcome);
   registerReportCommand(program, io, outcome);
+  registerWorkbookCommand(program, io, outcome);
   registerFrontierCommand(program, io, outcome);
   registerCompareCommand(program, io, outcome);
   registerTallyCommand(program, io);

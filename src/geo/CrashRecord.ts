@@ -5,6 +5,8 @@ export interface CrashRecord {
   readonly line: number;
   readonly id: string;
   readonly year: number;
+  /** The calendar day, ISO (YYYY-MM-DD), as written in the file (a time after it does not shift it). */
+  readonly date: string;
   readonly severity: Severity;
   readonly type: CrashType;
   readonly location: GeoPoint;

@@ -3,7 +3,7 @@ import { CRASH_TYPES, SEVERITIES, type CrashType, type Severity } from "../model
 import { CRASH_FIELDS, type CrashField, type CrashMapping } from "./CrashMapping.js";
 import { detectDateFormat } from "./detectDateFormat.js";
 import { InputError } from "./InputError.js";
-import { DATE_FORMAT_EXAMPLES, parseCrashDate, type DateFormat } from "./parseCrashDate.js";
+import { DATE_FORMAT_EXAMPLES, parseCrashDate, type CalendarDate, type DateFormat } from "./parseCrashDate.js";
 import { CSV_DELIMITERS, parseCsv, type CsvDelimiter, type CsvRecord } from "./parseCsv.js";
 import { quoteValue } from "./quoteValue.js";
 
@@ -118,7 +118,7 @@ export function parseCrashCsv(text: string, mapping: CrashMapping, label: string
       reject("unknown-type", `crash ${shownId} has unknown crash type ${quoteValue(typeText)}`);
       continue;
     }
-    records.push({ line: row.line, id, year: date.year, severity, type, location: { lon, lat } });
+    records.push({ line: row.line, id, year: date.year, date: isoDate(date), severity, type, location: { lon, lat } });
   }
   const unknownCodes = [...unknown.values()].sort((a, b) => b.rows - a.rows || a.firstLine - b.firstLine);
   return { rowsRead: rows.length, records, rejected, unknownCodes, delimiter, dateFormat };
@@ -201,4 +201,8 @@ function detectDelimiter(text: string, mapping: CrashMapping, label: string): Cs
       hint: "pass --delimiter ',', ';' or tab, and map the column names in a --mapping file if they differ",
     },
   ]);
+}
+
+function isoDate(date: CalendarDate): string {
+  return `${String(date.year).padStart(4, "0")}-${String(date.month).padStart(2, "0")}-${String(date.day).padStart(2, "0")}`;
 }

@@ -1,3 +1,4 @@
+import type { Evaluation } from "../../analysis/evaluateBuiltProjects.js";
 import type { FrontierLevel } from "../../analysis/budgetFrontier.js";
 import type { PlanCase } from "../../analysis/casePlan.js";
 import type { PlanResult } from "../../analysis/planProgramme.js";
@@ -34,4 +35,6 @@ export interface ReportInput {
   /** File name offered by the embedded "download CSV" link. */
   readonly csvFileName: string;
   readonly uncertainty?: ReportUncertainty;
+  /** A before-after evaluation of built projects, shown as "Evidence from our own projects". */
+  readonly evaluation?: Evaluation;
 }

@@ -7,6 +7,7 @@ import { capitalListSection } from "./capitalListSection.js";
 import { planMethodNotes } from "../../analysis/planMethodNotes.js";
 import { cautionsSection } from "./cautionsSection.js";
 import { escapeHtml } from "./escapeHtml.js";
+import { evidenceSection } from "./evidenceSection.js";
 import { exportSection } from "./exportSection.js";
 import { programmeSection } from "./programmeSection.js";
 import { notFundedSection } from "./notFundedSection.js";
@@ -54,6 +55,7 @@ ${budgetSection(input)}
 ${notFundedSection(input)}
 ${robustnessSection(input)}
 ${sensitivitySection(input)}
+${evidenceSection(input.evaluation)}
 ${assumptionsSection(input.plan)}
 ${warningsSection(input.warnings)}
 ${exportSection(planCsv(input.plan), input.csvFileName)}

@@ -88,7 +88,8 @@ export function evaluateBuiltProjects(study: BuiltProjects, catalogue: Catalogue
           const afterObserved = sum(counts.map((entry) => entry.afterObserved));
           const warnings = [
             ...(afterObserved < FEW_AFTER_CRASHES ? [`only ${afterObserved} crash(es) after: too few for a stable estimate`] : []),
-            ...(afterSiteYears / treated.length < FEW_AFTER_YEARS ? [`the after periods average ${(afterSiteYears / treated.length).toFixed(1)} years, under ${FEW_AFTER_YEARS}`] : []),
+            // Two calendar years without a 29 February are 730 days, 1.9986 years: a day's slack keeps them whole.
+            ...(afterSiteYears / treated.length < FEW_AFTER_YEARS - 1 / 365.25 ? [`the after periods average ${(afterSiteYears / treated.length).toFixed(1)} years, under ${FEW_AFTER_YEARS}`] : []),
             ...(withSpf.length < counts.length ? [`${counts.length - withSpf.length} of ${counts.length} site(s) cannot use Empirical Bayes for ${group.label}`] : []),
           ];
           return {

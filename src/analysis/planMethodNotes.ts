@@ -1,3 +1,4 @@
+import { effectEvidenceLines } from "../model/effectEvidenceLines.js";
 import type { PlanResult } from "./planProgramme.js";
 import { singleFatalCrashShare, type SingleFatalCrashShare } from "./singleFatalCrashShare.js";
 
@@ -39,6 +40,11 @@ export function planMethodNotes(result: PlanResult): PlanMethodNotes {
     notes.push(
       `${sharedCellProjects.length} funded project(s) combine treatments that act on the same crash cells (${sharedCellProjects.join(", ")}); their combined CMF follows the scenario's combination rule, an assumption rather than a measured effect.`,
     );
+  }
+  // One line per effect of a funded treatment whose CMF rests on local evidence, with both inputs.
+  for (const treatment of prepared.scenario.catalogue.treatments) {
+    const sites = result.funded.filter(({ alternative }) => alternative.treatments.includes(treatment.id)).map(({ entry }) => entry.site.id);
+    if (sites.length > 0) for (const line of effectEvidenceLines([treatment])) notes.push(`Local evidence (funded at ${sites.join(", ")}): ${line}.`);
   }
   return { baselineCounts, observedBaselineProjects, singleFatal, sharedCellProjects, notes };
 }

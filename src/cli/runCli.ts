@@ -12,6 +12,7 @@ import { registerInitCommand } from "./commands/initCommand.js";
 import { registerPlanCommand } from "./commands/planCommand.js";
 import { registerUncertaintyCommand } from "./commands/uncertaintyCommand.js";
 import { registerReportCommand } from "./commands/reportCommand.js";
+import { registerEvaluateCommand } from "./commands/evaluateCommand.js";
 import { registerScreenCommand } from "./commands/screenCommand.js";
 import { registerTallyCommand } from "./commands/tallyCommand.js";
 import { registerWorkbookCommand } from "./commands/workbookCommand.js";
@@ -43,6 +44,7 @@ export function createProgram(io: CliIo, outcome: CommandOutcome = { exitCode: E
   registerTallyCommand(program, io);
   registerInitCommand(program, io);
   registerScreenCommand(program, io);
+  registerEvaluateCommand(program, io);
   for (const command of program.commands) command.exitOverride().configureOutput({ writeOut: io.stdout, writeErr: io.stderr });
   program.hook("preAction", (_program, action) => allowOutsideFiles(action.optsWithGlobals<{ allowOutsideFiles?: boolean }>().allowOutsideFiles === true));
   return program;

@@ -14,6 +14,7 @@ import {
 } from "../model/types.js";
 import { InputError, type InputProblem } from "./InputError.js";
 import { readYamlFile, type YamlSource } from "./readYamlFile.js";
+import { toLocalEvidence, type CatalogueLocalEvidence, type RawLocalEvidence } from "./toLocalEvidence.js";
 import { validateWithSchema } from "./validateWithSchema.js";
 
 interface RawEffect {
@@ -47,18 +48,22 @@ interface RawPerformanceFunction {
   shares: Partial<Record<CrashType, Partial<Record<Severity, number>>>>;
   source: string;
 }
+/** The schema asks for treatments, localEvidence or both. */
 interface RawCatalogue {
-  treatments: RawTreatment[];
+  treatments?: RawTreatment[];
   performanceFunctions?: RawPerformanceFunction[];
+  localEvidence?: RawLocalEvidence[];
 }
 
 /** A catalogue with the file it came from, so later checks can point into it. */
 export interface LoadedCatalogue {
   readonly catalogue: Catalogue;
   readonly source: YamlSource;
+  /** Its local CMF evidence, applied once every catalogue of a scenario is loaded (applyLocalEvidence). */
+  readonly localEvidence: readonly CatalogueLocalEvidence[];
 }
 
-/** Reads, validates and converts one treatment catalogue file. Throws InputError on bad input. */
+/** Reads, validates and converts one catalogue file (treatments, SPFs, local CMF evidence). Throws InputError on bad input. */
 export function loadCatalogue(file: string, label: string = file): LoadedCatalogue {
   const source = readYamlFile(file, label);
   const schemaProblems = validateWithSchema(source, "catalogue");
@@ -69,9 +74,10 @@ export function loadCatalogue(file: string, label: string = file): LoadedCatalog
   return {
     source,
     catalogue: {
-      treatments: raw.treatments.map(toTreatment),
+      treatments: (raw.treatments ?? []).map(toTreatment),
       performanceFunctions: (raw.performanceFunctions ?? []).map(toPerformanceFunction),
     },
+    localEvidence: toLocalEvidence(raw.localEvidence),
   };
 }
 
@@ -121,7 +127,7 @@ function toPerformanceFunction(raw: RawPerformanceFunction): SafetyPerformanceFu
 function checkTreatments(raw: RawCatalogue, source: YamlSource): InputProblem[] {
   const problems: InputProblem[] = [];
   const firstIndex = new Map<string, number>();
-  raw.treatments.forEach((treatment, index) => {
+  (raw.treatments ?? []).forEach((treatment, index) => {
     const earlier = firstIndex.get(treatment.id);
     if (earlier !== undefined) {
       problems.push({

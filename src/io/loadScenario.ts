@@ -3,6 +3,7 @@ import { resolveCrashCosts, type StatedCrashCosts } from "../model/resolveCrashC
 import type { AreaType, BaselineMethod, Catalogue, CmfCombinationRule, CrashType, Objective, RenewalRule, Scenario, Severity, Site, SiteKind, UncertaintySettings } from "../model/types.js";
 import type { PolicyRule } from "../model/policyRule.js";
 import type { CarryOverRule, ProgrammeYears } from "../model/programmeTypes.js";
+import { applyLocalEvidence } from "./applyLocalEvidence.js";
 import { calibrateCatalogue } from "./calibrateCatalogue.js";
 import { checkAlternativeCounts } from "./checkAlternativeCounts.js";
 import { checkScenarioReferences } from "./checkScenarioReferences.js";
@@ -114,19 +115,17 @@ export function loadScenarioSource(source: YamlSource, file: string): LoadedScen
   const raw: RawScenario = { ...(source.data as RawScenario), crashWindow: located.crashWindow, sites: located.sites };
 
   const catalogues = loadListedCatalogues(raw.catalogues, source, file);
-  const catalogue: Catalogue = {
-    treatments: catalogues.flatMap((loaded) => loaded.catalogue.treatments),
-    performanceFunctions: catalogues.flatMap((loaded) => loaded.catalogue.performanceFunctions),
-  };
+  // Local evidence pools with the published CMFs once every catalogue is in.
+  const evidence = applyLocalEvidence(catalogues);
 
   const sitesSource = located.source;
-  const problems = checkScenarioReferences(raw, source, catalogues, sitesSource);
+  const problems = [...checkScenarioReferences(raw, source, catalogues, sitesSource), ...evidence.problems];
   if (problems.length > 0) throw new InputError(problems);
 
-  const scenario = toScenario(raw, catalogue);
+  const scenario = toScenario(raw, evidence.catalogue);
   const tooMany = checkAlternativeCounts(scenario, raw, source, sitesSource);
   if (tooMany.length > 0) throw new InputError(tooMany);
-  return { scenario, source, sitesSource, catalogues, warnings: scenarioWarnings(scenario, raw, source, catalogues, sitesSource), notes: scenarioNotes(raw, source, sitesSource) };
+  return { scenario, source, sitesSource, catalogues, warnings: [...scenarioWarnings(scenario, raw, source, catalogues, sitesSource), ...evidence.warnings], notes: scenarioNotes(raw, source, sitesSource) };
 }
 
 function amount(value: Amount): number {

@@ -8,8 +8,8 @@ import { packageRoot } from "./packageRoot.js";
 import type { YamlSource } from "./readYamlFile.js";
 import { quoteValue } from "./quoteValue.js";
 
-export type SchemaName = "scenario" | "catalogue" | "sites";
-const SCHEMA_NAMES: readonly SchemaName[] = ["scenario", "catalogue", "sites"];
+export type SchemaName = "scenario" | "catalogue" | "sites" | "projects";
+const SCHEMA_NAMES: readonly SchemaName[] = ["scenario", "catalogue", "sites", "projects"];
 
 const compiled = new Map<SchemaName, ValidateFunction>();
 let ajv: Ajv | undefined;
@@ -17,7 +17,7 @@ let ajv: Ajv | undefined;
 function validatorFor(name: SchemaName): ValidateFunction {
   let validate = compiled.get(name);
   if (!validate) {
-    // One instance holds every schema, so the sites schema can refer to the scenario's site definition.
+    // One instance holds every schema, so the sites and projects schemas can refer to the scenario's definitions.
     if (!ajv) {
       ajv = new Ajv({ allErrors: true, strict: false, verbose: true });
       for (const each of SCHEMA_NAMES) ajv.addSchema(JSON.parse(readFileSync(join(packageRoot(), "schema", `${each}.schema.json`), "utf8")), each);

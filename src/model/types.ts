@@ -3,6 +3,7 @@
  * Money is in the scenario's currency units; years are whole years; rates are fractions.
  */
 import type { PolicyRule } from "./policyRule.js";
+import type { EffectEvidence } from "./effectEvidenceTypes.js";
 import type { CapitalPhase, ProgrammeYears } from "./programmeTypes.js";
 import type { SpfCalibration } from "./spfCalibration.js";
 
@@ -52,6 +53,8 @@ export interface Effect {
   readonly standardError?: number;
   /** Where the value comes from (study, handbook table). */
   readonly source: string;
+  /** The published and local estimates behind the CMF, when a catalogue adds local evidence (absent: the published value as is). */
+  readonly evidence?: EffectEvidence;
 }
 
 /** How a treatment's capital cost is computed. */
@@ -181,8 +184,7 @@ export interface Economics {
   readonly crashCosts: CrashCosts;
   /** Price year of capital costs and the budget (the programme's money), when stated. */
   readonly priceYear?: number;
-  /** Annual AADT growth, a fraction; expected crashes grow with it (see siteBaselines). */
-  /** Absent: 0. */
+  /** Annual AADT growth, a fraction; expected crashes grow with it (see siteBaselines). Absent: 0. */
   readonly trafficGrowthRate?: number;
   /** Absent: none. */
   readonly renewal?: RenewalRule;
@@ -191,7 +193,6 @@ export interface Economics {
 }
 
 export type Objective = "ksi" | "benefit";
-
 /** How the uncertainty draws treat CMFs; every field optional, its default stated where it is read. */
 export interface UncertaintySettings {
   /** Coefficient of variation given to a CMF that publishes no standard error (SE = cv × CMF), or "off" to hold such CMFs exact. */

@@ -1,4 +1,5 @@
 import { describeCmfCombination } from "../model/combineCmfs.js";
+import { effectEvidenceLines } from "../model/effectEvidenceLines.js";
 import { describeServiceLives } from "../model/evaluateAlternative.js";
 import { describeTrafficGrowth, type SiteBaseline } from "../model/siteBaselines.js";
 import type { Scenario } from "../model/types.js";
@@ -33,6 +34,8 @@ export interface Assumptions {
   readonly trafficGrowth: string;
   readonly calibration: string;
   readonly ksiDefinition: string;
+  /** One line per effect whose CMF rests on local before-after evidence: the result, both inputs and the rule (absent: none, so outputs without it keep their bytes). */
+  readonly localEvidence?: readonly string[];
 }
 
 /** Collects the scenario's economic and method assumptions in one plain object. */
@@ -40,6 +43,7 @@ export function describeAssumptions(scenario: Scenario, baselines?: readonly Sit
   const { economics } = scenario;
   const costs = economics.crashCosts;
   const ksiCosting = costs.ksiCosting;
+  const localEvidence = effectEvidenceLines(scenario.catalogue.treatments);
   return {
     currency: scenario.currency,
     discountRate: economics.discountRate,
@@ -62,6 +66,7 @@ export function describeAssumptions(scenario: Scenario, baselines?: readonly Sit
     trafficGrowth: describeTrafficGrowth(economics.trafficGrowthRate ?? 0),
     calibration: describeCalibration(scenario),
     ksiDefinition: KSI_AVOIDED_DEFINITION,
+    ...(localEvidence.length > 0 && { localEvidence }),
   };
 }
 

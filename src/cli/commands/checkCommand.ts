@@ -3,6 +3,7 @@ import { preparePlan } from "../../analysis/preparePlan.js";
 import { formatProblem } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
 import { sumCrashMatrix } from "../../model/crashMatrix.js";
+import { effectEvidenceLines } from "../../model/effectEvidenceLines.js";
 import { windowYears } from "../../model/siteBaselines.js";
 import { sitesWithoutCandidates } from "../../model/sitesWithoutCandidates.js";
 import { KSI_SEVERITIES } from "../../model/types.js";
@@ -32,6 +33,7 @@ export function registerCheckCommand(program: Command, io: CliIo): void {
         ...(loaded.sitesSource !== loaded.source ? [`  sites file     ${loaded.sitesSource.file}`] : []),
         `  sites          ${scenario.sites.length} (${byKind("intersection")} intersections, ${byKind("segment")} segments, ${byKind("corridor")} corridors) in ${new Set(scenario.sites.map((s) => s.district)).size} district(s)`,
         `  treatments     ${scenario.catalogue.treatments.length} in ${loaded.catalogues.length} catalogue(s)`,
+        ...localEvidenceLines(scenario),
         `  alternatives   ${alternatives} (up to ${scenario.maxTreatmentsPerSite} treatments per site${scenario.programme === undefined ? "" : ", each in every build year it can have"})`,
         ...(withoutCandidates.length > 0 ? [`  no candidates  ${withoutCandidates.length} site(s): screened and counted, but they cannot be funded until treatments are listed`] : []),
         `  crashes        ${crashes} in ${scenario.crashWindow.firstYear}-${scenario.crashWindow.lastYear}, of which KSI crashes (K+A) ${ksi} (${formatFixed(ksi / windowYears(scenario), 1)} a year)`,
@@ -63,6 +65,13 @@ function summariseProblems(label: string, warnings: readonly { code: string; tex
     if (texts.length > listed) lines.push(`${label}: … and ${texts.length - listed} more like these`);
   }
   return lines.join("\n") + "\n";
+}
+
+/** Each effect whose CMF rests on local evidence, with the result, both inputs and the rule. */
+function localEvidenceLines(scenario: Scenario): string[] {
+  const lines = effectEvidenceLines(scenario.catalogue.treatments);
+  if (lines.length === 0) return [];
+  return [`  local evidence ${lines.length} effect(s) with a local CMF:`, ...lines.map((line) => `    - ${line}`)];
 }
 
 /** What `check` says of a multi-year programme: years, budgets, carry-over, escalation, phasing and commitments. */

@@ -11,6 +11,7 @@ import { formatProblem } from "../../io/InputError.js";
 import { loadScenario } from "../../io/loadScenario.js";
 import { checkDistinctOutputs, checkOutputTarget, writeOutputFile } from "../../io/writeOutputFile.js";
 import type { ReportUncertainty } from "../../report/html/ReportInput.js";
+import { loadEvaluation } from "./evaluateCommand.js";
 import { reportHtml } from "../../report/html/reportHtml.js";
 import { planCsv } from "../../report/planCsv.js";
 import { progressBar } from "../../report/progressBar.js";
@@ -29,6 +30,7 @@ interface ReportOptions extends DrawOptionText {
   budget?: string;
   steps: string;
   csv?: string;
+  evaluation?: string;
   engine: string;
   timeLimit: string;
 }
@@ -49,6 +51,7 @@ export function registerReportCommand(program: Command, io: CliIo, outcome: Comm
     .option("-b, --budget <amount>", "budget to use instead of the scenario's (4500000, 4.5M, 750k)")
     .option("--steps <n>", "budget steps on the frontier chart and slider, from 0 to the cost of every site's best option", "20")
     .option("--csv <file>", "also write the capital list as CSV")
+    .option("--evaluation <projects>", "add the before-after evaluation of this built-projects file (see averta evaluate)")
     .option("--engine <engine>", `solver engine: ${ENGINES.join(", ")}`, "auto")
     .option("--time-limit <seconds>", "longest each solve may run before it returns its best verified list, marked time-limit with its gap (whole seconds)", "60")
     .action(async (file: string, options: ReportOptions) => {
@@ -64,6 +67,7 @@ export function registerReportCommand(program: Command, io: CliIo, outcome: Comm
       if (options.csv !== undefined) checkOutputTarget(options.csv, force, "--csv");
 
       const { scenario, warnings } = loadScenario(file);
+      const evaluation = options.evaluation === undefined ? undefined : loadEvaluation(options.evaluation, io).evaluation;
       const budget = requestedBudget ?? scenario.budget;
       const prepared = preparePlan(scenario);
       // The chosen budget joins the evenly spaced levels so the slider can return to it exactly.
@@ -82,6 +86,7 @@ export function registerReportCommand(program: Command, io: CliIo, outcome: Comm
         planCase,
         frontier,
         ...(uncertainty !== undefined && { uncertainty }),
+        ...(evaluation !== undefined && { evaluation }),
         csvFileName,
         warnings: warnings.map((warning) => ({
           where: formatProblem({ ...warning, message: "", hint: undefined }).replace(/:\s*$/, ""),

@@ -78,6 +78,7 @@ export function assumptionsSheet(scenario: Scenario, baselines: readonly SiteBas
   add("SPF calibration", described.calibration, "");
   add("Crash window", `${scenario.crashWindow.firstYear}–${scenario.crashWindow.lastYear}`, "");
   add("K+A crashes avoided", described.ksiDefinition, "");
+  for (const line of described.localEvidence ?? []) add("CMF with local evidence", line, "fixed for this workbook: the crashes avoided per year are written as values");
   if (scenario.programme !== undefined) {
     const p = scenario.programme;
     add("Programme years", `${p.firstYear}–${p.firstYear + p.years - 1}`, "figures are discounted to the start of the first year");

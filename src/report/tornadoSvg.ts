@@ -1,9 +1,7 @@
+import { svgNumber } from "./svgNumber.js";
 import type { SensitivityResult } from "../analysis/uncertainty/oneAtATimeSensitivity.js";
 import { escapeXml } from "./escapeXml.js";
 
-function number(value: number): string {
-  return Number(value.toFixed(2)).toString();
-}
 
 // About 6.6 px a character at 12 px sans-serif (common practice for Latin text): lines of 44
 // characters end well short of the change dot, so a label is wrapped, never cut.
@@ -61,8 +59,8 @@ export function tornadoSvg(sensitivity: SensitivityResult, title: string): strin
   const height = bottom + 50;
   const width = LABEL_WIDTH + 2 * PANEL_WIDTH + GAP + 20;
   const panels = [
-    { key: "ksiAvoidedChange" as const, heading: `Change in KSI avoided (base ${number(sensitivity.baseKsiAvoided)})`, x: LABEL_WIDTH },
-    { key: "bcRatioChange" as const, heading: `Change in B/C (base ${number(sensitivity.baseBcRatio)})`, x: LABEL_WIDTH + PANEL_WIDTH + GAP },
+    { key: "ksiAvoidedChange" as const, heading: `Change in KSI avoided (base ${svgNumber(sensitivity.baseKsiAvoided)})`, x: LABEL_WIDTH },
+    { key: "bcRatioChange" as const, heading: `Change in B/C (base ${svgNumber(sensitivity.baseBcRatio)})`, x: LABEL_WIDTH + PANEL_WIDTH + GAP },
   ];
   const parts: string[] = [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" font-family="sans-serif" font-size="12">`,
@@ -82,18 +80,18 @@ export function tornadoSvg(sensitivity: SensitivityResult, title: string): strin
         if (!Number.isFinite(value)) continue;
         const length = Math.abs(value) * scale;
         const x = value < 0 ? zero - length : zero;
-        parts.push(`<rect x="${number(x)}" y="${y}" width="${number(length)}" height="${BAR_HEIGHT}" fill="${colour}" fill-opacity="0.8"><title>${escapeXml(`${row.parameter}: ${label} → ${number(value)}`)}</title></rect>`);
+        parts.push(`<rect x="${svgNumber(x)}" y="${y}" width="${svgNumber(length)}" height="${BAR_HEIGHT}" fill="${colour}" fill-opacity="0.8"><title>${escapeXml(`${row.parameter}: ${label} → ${svgNumber(value)}`)}</title></rect>`);
       }
     });
-    parts.push(`<text x="${panel.x}" y="${bottom + 16}">${number(-extent)}</text>`);
-    parts.push(`<text x="${panel.x + PANEL_WIDTH}" y="${bottom + 16}" text-anchor="end">+${number(extent)}</text>`);
+    parts.push(`<text x="${panel.x}" y="${bottom + 16}">${svgNumber(-extent)}</text>`);
+    parts.push(`<text x="${panel.x + PANEL_WIDTH}" y="${bottom + 16}" text-anchor="end">+${svgNumber(extent)}</text>`);
   }
   rows.forEach((row, index) => {
     const middle = rowTop[index]! + rowHeights[index]! / 2;
     const changes = row.low.listChanges || row.high.listChanges;
     const wrapped = lines[index]!;
     const first = middle + 4 - ((wrapped.length - 1) * LINE_HEIGHT) / 2;
-    const spans = wrapped.map((line, at) => `<tspan x="10" y="${number(first + at * LINE_HEIGHT)}">${escapeXml(line)}</tspan>`).join("");
+    const spans = wrapped.map((line, at) => `<tspan x="10" y="${svgNumber(first + at * LINE_HEIGHT)}">${escapeXml(line)}</tspan>`).join("");
     parts.push(`<text class="tornado-label">${spans}<title>${escapeXml(labels[index]!)}</title></text>`);
     if (changes) parts.push(`<circle cx="${LABEL_WIDTH - 8}" cy="${middle}" r="4" fill="${CHANGE_COLOUR}"><title>re-optimising changes the list</title></circle>`);
   });

@@ -1,3 +1,4 @@
+import { svgNumber } from "../svgNumber.js";
 import type { Evaluation } from "../../analysis/evaluateBuiltProjects.js";
 import { escapeXml } from "../escapeXml.js";
 import { niceTicks } from "../niceTicks.js";
@@ -12,9 +13,6 @@ const BOTTOM_MARGIN = 44;
 const ESTIMATE_COLOUR = "#0072B2";
 const REFERENCE_COLOUR = "#777777";
 
-function number(value: number): string {
-  return Number(value.toFixed(2)).toString();
-}
 
 /**
  * The evaluation's estimates as a standalone SVG interval chart: one row per group of projects ×
@@ -39,22 +37,22 @@ export function evaluationSvg(evaluation: Evaluation): string {
     `<text x="8" y="38" fill="#444">Left of the dashed line: fewer crashes than expected without the treatment. Estimates are uncertain; see the cautions.</text>`,
   ];
   for (const tick of ticks) {
-    parts.push(`<line x1="${number(x(tick))}" y1="${TOP - 4}" x2="${number(x(tick))}" y2="${TOP + rows.length * ROW_HEIGHT}" stroke="#e0e0e0"/>`);
-    parts.push(`<text x="${number(x(tick))}" y="${TOP + rows.length * ROW_HEIGHT + 16}" text-anchor="middle">${number(tick)}</text>`);
+    parts.push(`<line x1="${svgNumber(x(tick))}" y1="${TOP - 4}" x2="${svgNumber(x(tick))}" y2="${TOP + rows.length * ROW_HEIGHT}" stroke="#e0e0e0"/>`);
+    parts.push(`<text x="${svgNumber(x(tick))}" y="${TOP + rows.length * ROW_HEIGHT + 16}" text-anchor="middle">${svgNumber(tick)}</text>`);
   }
-  parts.push(`<line x1="${number(x(1))}" y1="${TOP - 4}" x2="${number(x(1))}" y2="${TOP + rows.length * ROW_HEIGHT}" stroke="${REFERENCE_COLOUR}" stroke-dasharray="4 3"/>`);
-  parts.push(`<text x="${number(LABEL_WIDTH + PLOT_WIDTH / 2)}" y="${height - 8}" text-anchor="middle">θ: crashes with ÷ expected without the treatment</text>`);
+  parts.push(`<line x1="${svgNumber(x(1))}" y1="${TOP - 4}" x2="${svgNumber(x(1))}" y2="${TOP + rows.length * ROW_HEIGHT}" stroke="${REFERENCE_COLOUR}" stroke-dasharray="4 3"/>`);
+  parts.push(`<text x="${svgNumber(LABEL_WIDTH + PLOT_WIDTH / 2)}" y="${height - 8}" text-anchor="middle">θ: crashes with ÷ expected without the treatment</text>`);
   rows.forEach((row, index) => {
     const y = TOP + index * ROW_HEIGHT + ROW_HEIGHT / 2;
     const label = row.label.length > 52 ? `${row.label.slice(0, 51)}…` : row.label;
-    parts.push(`<text x="8" y="${number(y + 4)}">${escapeXml(label)}</text>`);
+    parts.push(`<text x="8" y="${svgNumber(y + 4)}">${escapeXml(label)}</text>`);
     if (row.estimate === null) {
-      parts.push(`<text x="${LABEL_WIDTH + 4}" y="${number(y + 4)}" fill="#777">no estimate</text>`);
+      parts.push(`<text x="${LABEL_WIDTH + 4}" y="${svgNumber(y + 4)}" fill="#777">no estimate</text>`);
       return;
     }
     const { theta, lower95, upper95 } = row.estimate;
-    parts.push(`<line x1="${number(x(lower95))}" y1="${number(y)}" x2="${number(x(upper95))}" y2="${number(y)}" stroke="${ESTIMATE_COLOUR}" stroke-width="2"/>`);
-    parts.push(`<circle cx="${number(x(theta))}" cy="${number(y)}" r="4" fill="${ESTIMATE_COLOUR}"><title>${escapeXml(`${row.label}: θ ${theta.toFixed(3)} (${lower95.toFixed(3)}–${upper95.toFixed(3)}), ${row.method}`)}</title></circle>`);
+    parts.push(`<line x1="${svgNumber(x(lower95))}" y1="${svgNumber(y)}" x2="${svgNumber(x(upper95))}" y2="${svgNumber(y)}" stroke="${ESTIMATE_COLOUR}" stroke-width="2"/>`);
+    parts.push(`<circle cx="${svgNumber(x(theta))}" cy="${svgNumber(y)}" r="4" fill="${ESTIMATE_COLOUR}"><title>${escapeXml(`${row.label}: θ ${theta.toFixed(3)} (${lower95.toFixed(3)}–${upper95.toFixed(3)}), ${row.method}`)}</title></circle>`);
   });
   parts.push("</svg>");
   return parts.join("\n") + "\n";
